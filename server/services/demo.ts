@@ -1,0 +1,110 @@
+import type { Knex } from 'knex';
+import type { Logger } from '../lib/logger.js';
+import { createUser } from './users.js';
+import { demoPattern } from './demo-pattern.js';
+
+export const DEMO_MAKER = { email: 'demo-maker@example.com', password: 'loops-and-rounds', displayName: 'Wren (demo maker)' };
+export const DEMO_ADMIN = { email: 'admin@example.com', password: 'admin-loops-and-rounds', displayName: 'Whorlbook admin' };
+
+/** True once the demo has been seeded into this database (the sign-in page then shows the demo accounts). */
+export async function hasDemo(db: Knex) {
+  return Boolean(await db('users').where({ email: DEMO_MAKER.email }).first('id'));
+}
+
+/** Seeds the demo on first start with an empty database; does nothing otherwise. */
+export async function seedDemo(db: Knex, logger?: Logger) {
+  const { count } = (await db('users').count({ count: '*' }).first()) as { count: number };
+  if (Number(count) > 0) return false;
+
+  const maker = await createUser(db, { ...DEMO_MAKER, emailVerified: true });
+  await createUser(db, { ...DEMO_ADMIN, role: 'admin', emailVerified: true });
+
+  await db.transaction(async (trx) => {
+    const p = demoPattern;
+    const [{ id: patternId }] = await trx('patterns')
+      .insert({
+        owner_id: maker.id,
+        title: p.title,
+        designer_credit: p.designerCredit,
+        source_url: p.sourceUrl,
+        terms: p.terms,
+        gauge: JSON.stringify(p.gauge),
+        skill_notes: p.skillNotes,
+        materials: JSON.stringify(p.materials),
+      })
+      .returning('id');
+    await trx('pattern_pieces').insert(
+      p.pieces.map((piece, position) => ({
+        pattern_id: patternId,
+        position,
+        name: piece.name,
+        copies: piece.copies,
+        hook_mm: piece.hookMm,
+        yarns: JSON.stringify(piece.yarns),
+        instructions: piece.instructions,
+      })),
+    );
+
+    const [{ id: projectId }] = await trx('projects')
+      .insert({
+        owner_id: maker.id,
+        pattern_id: patternId,
+        title: 'Bramble for the window sill',
+        status: 'on_the_hook',
+        terms: p.terms,
+        pattern_credit: JSON.stringify({ title: p.title, designerCredit: p.designerCredit, sourceUrl: p.sourceUrl }),
+        started_on: '2026-11-24',
+        recipient: 'my sister Ines',
+        for_young_child: false,
+        materials: JSON.stringify(p.materials),
+        notes: 'Using the plum cotton from the yarn shelf. Eyes: 8 mm safety eyes.',
+      })
+      .returning('id');
+    const pieceRows = await trx('project_pieces')
+      .insert(
+        p.pieces.map((piece, position) => ({
+          project_id: projectId,
+          position,
+          name: piece.name,
+          copies: piece.copies,
+          hook_mm: piece.hookMm,
+          yarns: JSON.stringify(piece.yarns),
+          instructions: piece.instructions,
+        })),
+      )
+      .returning('id');
+    const bodyId = pieceRows[0].id;
+
+    await trx('journal_entries').insert([
+      {
+        project_id: projectId,
+        piece_id: null,
+        author_id: maker.id,
+        body: 'Wound the plum cotton and found my 3.5 mm hook. Starting tonight.',
+        entry_date: '2026-11-24',
+        minutes: 10,
+        tags: JSON.stringify(['progress']),
+      },
+      {
+        project_id: projectId,
+        piece_id: bodyId,
+        author_id: maker.id,
+        body: 'Body up to **Rnd 6** (36 sts). Moved the increases each round so the ball stays round, not hexagonal.',
+        entry_date: '2026-11-25',
+        minutes: 35,
+        tags: JSON.stringify(['progress']),
+      },
+      {
+        project_id: projectId,
+        piece_id: bodyId,
+        author_id: maker.id,
+        body: 'Working the even rounds a little tighter than the pattern gauge — went down to a 3.25 mm hook for Rnds 7–12.',
+        entry_date: '2026-11-27',
+        minutes: 40,
+        tags: JSON.stringify(['change']),
+      },
+    ]);
+  });
+  logger?.info('seeded the demo maker, admin, pattern and project');
+  return true;
+}

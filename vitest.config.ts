@@ -1,0 +1,44 @@
+import { defineConfig } from 'vitest/config';
+import react from '@vitejs/plugin-react';
+import { fileURLToPath } from 'node:url';
+
+const alias = { '@': fileURLToPath(new URL('./src', import.meta.url)) };
+
+// Three projects: the pure stitch engine, the server (real SQLite, supertest) and the client (happy-dom).
+export default defineConfig({
+  resolve: { alias },
+  test: {
+    projects: [
+      {
+        resolve: { alias },
+        test: {
+          name: 'engine',
+          environment: 'node',
+          include: ['tests/engine/**/*.test.ts'],
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'server',
+          environment: 'node',
+          include: ['tests/server/**/*.test.ts'],
+          setupFiles: ['tests/setup/server.ts'],
+          testTimeout: 20_000,
+          hookTimeout: 30_000,
+        },
+      },
+      {
+        plugins: [react()],
+        resolve: { alias },
+        test: {
+          name: 'client',
+          environment: 'happy-dom',
+          include: ['tests/client/**/*.test.{ts,tsx}'],
+          setupFiles: ['tests/setup/client.ts'],
+          testTimeout: 15_000,
+        },
+      },
+    ],
+  },
+});
