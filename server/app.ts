@@ -39,6 +39,8 @@ export function createApp(ctx: AppContext) {
         },
       },
       crossOriginEmbedderPolicy: false,
+      // HSTS only means something over https; on http://127.0.0.1 it would only confuse.
+      strictTransportSecurity: ctx.env.APP_ORIGIN?.startsWith('https:') ? undefined : false,
     }),
   );
   app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));

@@ -8,6 +8,8 @@ import { createApp } from './app.js';
 import { seedDemo } from './services/demo.js';
 import type { AppContext } from './context.js';
 
+// A local .env (see .env.example) is optional; real environment variables win over it.
+if (fs.existsSync('.env')) process.loadEnvFile('.env');
 const env = parseEnv();
 const logger = createLogger(env.LOG_LEVEL);
 fs.mkdirSync(env.dataDir, { recursive: true });

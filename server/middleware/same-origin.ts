@@ -14,7 +14,7 @@ export function sameOrigin(appOrigin?: string) {
     if (SAFE.has(req.method)) return next();
     const source = req.headers.origin ?? req.headers.referer;
     if (source === undefined) return next();
-    let sourceHost: string | null = null;
+    let sourceHost: string | null;
     try {
       sourceHost = new URL(source).host;
     } catch {

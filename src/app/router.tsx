@@ -1,0 +1,56 @@
+import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
+import { AppLayout } from '@/components/layouts/app-layout';
+import { PlainLayout } from '@/components/layouts/plain-layout';
+import { RequireAuth } from '@/components/layouts/require-auth';
+import { RouteErrorFallback } from '@/components/errors/error-fallback';
+import { Loading } from '@/components/ui/page';
+
+type Loader = () => Promise<{ default: React.ComponentType }>;
+/** One module per screen, loaded when first visited. */
+const screen = (load: Loader): Pick<RouteObject, 'lazy'> => ({ lazy: async () => ({ Component: (await load()).default }) });
+
+// Each area adds its screens to the matching list below (one line each).
+const publicScreens: RouteObject[] = [
+  { path: '/sign-in', ...screen(() => import('./routes/sign-in')) },
+  // accounts (issue 3): sign-up, forgot/reset password, verify e-mail, dev outbox
+];
+
+const standaloneScreens: RouteObject[] = [
+  // full-screen pages outside the app shell, e.g. the Tally (issue 6) and the showcase /p/:token (issue 8)
+];
+
+const memberScreens: RouteObject[] = [
+  { index: true, ...screen(() => import('./routes/on-the-hook')) },
+  // accounts (issue 3): /account
+  // patterns (issue 5): /patterns, /patterns/new, /patterns/:patternId
+  // projects (issue 5): /projects, /projects/new, /projects/:projectId, /yarns
+];
+
+const adminScreens: RouteObject[] = [
+  // accounts (issue 3): /admin
+];
+
+export const routes: RouteObject[] = [
+  {
+    errorElement: <RouteErrorFallback />,
+    hydrateFallbackElement: <Loading />,
+    children: [
+      { element: <PlainLayout />, children: publicScreens },
+      ...standaloneScreens,
+      {
+        element: <RequireAuth />,
+        children: [
+          { element: <AppLayout />, children: memberScreens },
+          { element: <RequireAuth role="admin" />, children: [{ element: <AppLayout />, children: adminScreens }] },
+        ],
+      },
+      { path: '*', element: <PlainLayout />, children: [{ path: '*', ...screen(() => import('./routes/not-found')) }] },
+    ],
+  },
+];
+
+const router = createBrowserRouter(routes);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,21 @@
+/** Every client route in one place, so links and the router agree. */
+export const paths = {
+  home: '/',
+  signIn: '/sign-in',
+  signUp: '/sign-up',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
+  verifyEmail: '/verify-email',
+  account: '/account',
+  admin: '/admin',
+  outbox: '/dev/outbox',
+  patterns: '/patterns',
+  newPattern: '/patterns/new',
+  pattern: (id: number | string) => `/patterns/${id}`,
+  projects: '/projects',
+  newProject: '/projects/new',
+  project: (id: number | string) => `/projects/${id}`,
+  tally: (projectId: number | string, pieceId: number | string) => `/projects/${projectId}/pieces/${pieceId}/count`,
+  yarnShelf: '/yarns',
+  showcase: (token: string) => `/p/${token}`,
+} as const;

@@ -1,0 +1,22 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiGet } from '@/lib/api-client';
+import type { ProjectStatus } from '@/schemas/common';
+import { projectKeys } from './keys';
+
+export interface ProjectListItem {
+  id: number;
+  title: string;
+  status: ProjectStatus;
+  startedOn: string | null;
+  finishedOn: string | null;
+  updatedAt: string;
+  pieceCount: number;
+}
+
+export const projectsQueryOptions = (filters: { status?: ProjectStatus } = {}) =>
+  queryOptions({
+    queryKey: projectKeys.list(filters),
+    queryFn: async ({ signal }) => (await apiGet<{ projects: ProjectListItem[] }>('/projects', filters, signal)).projects,
+  });
+
+export const useProjects = (filters: { status?: ProjectStatus } = {}) => useQuery(projectsQueryOptions(filters));
