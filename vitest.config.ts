@@ -14,7 +14,7 @@ export default defineConfig({
         test: {
           name: 'engine',
           environment: 'node',
-          include: ['tests/engine/**/*.test.ts'],
+          include: ['tests/engine/**/*.test.ts', 'tests/reference/**/*.test.ts'],
         },
       },
       {
