@@ -1,0 +1,142 @@
+// Shapes the API answers with, shared by the client features (and matched by the server's serializers).
+// Additive changes only: several screens read these.
+import type { Materials, Yarn } from '@/schemas/materials';
+import type { ProjectStatus } from '@/schemas/common';
+import type { Terms } from '@/engine/types';
+
+export interface HookOut {
+  mm: number;
+  us: string | null;
+}
+
+export interface RoundCheckOut {
+  number: number;
+  label: string;
+  line: number;
+  stitches: number;
+  worked: number;
+  stated: number | null;
+  problems: Array<{ message: string; column: number | null; severity: 'error' | 'warning' }>;
+}
+
+export interface PatternPiece {
+  id: number;
+  position: number;
+  name: string;
+  copies: number;
+  hookMm: number | null;
+  hook: HookOut | null;
+  yarns: string[];
+  instructions: string;
+  check: { rounds: RoundCheckOut[]; problemCount: number };
+}
+
+export interface Gauge {
+  stitches: number;
+  rows: number;
+  over: '10cm' | '4in';
+  stitch?: string;
+  hookMm?: number;
+}
+
+export interface Pattern {
+  id: number;
+  title: string;
+  designerCredit: string | null;
+  sourceUrl: string | null;
+  terms: Terms;
+  gauge: Gauge | null;
+  skillNotes: string | null;
+  materials: Materials;
+  visibility: 'private' | 'testers' | 'public';
+  pieces: PatternPiece[];
+  cautions: Caution[];
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface Caution {
+  code: string;
+  title: string;
+  message: string;
+}
+
+export interface PieceProgress {
+  /** 1-based copy being worked. */
+  copy: number;
+  /** 0-based index into the piece's checked rounds. */
+  round: number;
+  /** Steps done in the current round. */
+  step: number;
+  /** Total steps completed on this piece across all copies. */
+  done: number;
+  version: number;
+  updatedAt: string | null;
+}
+
+export interface Placement {
+  id: number;
+  pieceId: number;
+  copy: number;
+  round: number;
+  step: number | null;
+  label: string;
+  note: string | null;
+  createdAt: string;
+}
+
+export interface ProjectPiece {
+  id: number;
+  position: number;
+  name: string;
+  copies: number;
+  hookMm: number | null;
+  hook: HookOut | null;
+  yarns: string[];
+  instructions: string;
+  progress: PieceProgress;
+  /** From the stitch engine over this piece's own instructions. */
+  totals: { rounds: number; stepsPerCopy: number; copiesDone: number; roundsDone: number };
+  placements: Placement[];
+}
+
+export interface PhotoOut {
+  id: number;
+  url: string;
+  thumbUrl: string;
+  width: number;
+  height: number;
+  alt: string;
+}
+
+export interface Project {
+  id: number;
+  title: string;
+  status: ProjectStatus;
+  patternId: number | null;
+  patternCredit: { title: string; designerCredit: string | null; sourceUrl: string | null } | null;
+  terms: Terms;
+  startedOn: string | null;
+  finishedOn: string | null;
+  recipient: string | null;
+  forYoungChild: boolean;
+  materials: Materials;
+  notes: string | null;
+  visibility: 'private' | 'link' | 'public';
+  /** Absolute link (or a path starting with /p/) while shared; null when private. */
+  shareUrl: string | null;
+  coverPhoto: PhotoOut | null;
+  pieces: ProjectPiece[];
+  cautions: Caution[];
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface ShelfYarn extends Yarn {
+  id: number;
+  skeinsOwned: number;
+  /** Meters left on the shelf, when known (skeins owned × meters per skein − meters used in projects). */
+  metersLeft: number | null;
+  yardsLeft: number | null;
+  notes: string | null;
+}
