@@ -49,10 +49,23 @@ export interface Pattern {
   skillNotes: string | null;
   materials: Materials;
   visibility: 'private' | 'testers' | 'public';
+  /** True when the signed-in member owns it (others may only read a public pattern). */
+  mine: boolean;
   pieces: PatternPiece[];
   cautions: Caution[];
   createdAt: string;
   updatedAt: string;
+}
+
+/** A light row of GET /api/patterns. */
+export interface PatternListItem {
+  id: number;
+  title: string;
+  designerCredit: string | null;
+  pieceCount: number;
+  problemCount: number;
+  updatedAt: string;
+  visibility: 'private' | 'testers' | 'public';
 }
 
 export interface Caution {
