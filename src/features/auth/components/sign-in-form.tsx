@@ -48,8 +48,8 @@ export function SignInForm() {
             E-mail <code className="font-semibold">{demo.data.email}</code>, password <code className="font-semibold">{demo.data.password}</code>
           </p>
           <Button
-            variant="secondary"
-            className="mt-2"
+            variant="quiet"
+            className="mt-2 ring-2 ring-moss"
             onClick={() => {
               form.setValue('email', demo.data!.email);
               form.setValue('password', demo.data!.password);
