@@ -1,0 +1,67 @@
+import { z } from 'zod';
+
+// The showcase (shared finished-project page): comments, cheers, reports and the comment e-mail setting.
+// Shared by the API routes and the forms.
+
+export const COMMENT_MAX = 2000;
+export const REPORT_REASON_MAX = 500;
+
+/** Characters as a person counts them: an emoji is one, not two UTF-16 units. */
+export const characterCount = (s: string) => [...s].length;
+
+const formatCount = (n: number) => n.toLocaleString('en-US');
+
+/** A comment is plain text, kept exactly as typed (never trimmed, escaped or rewritten) and shown only as text. */
+export const CommentBodySchema = z
+  .string({ message: 'Write a comment first.' })
+  .refine((s) => s.trim().length > 0, { message: 'Write a comment first.' })
+  .superRefine((s, ctx) => {
+    const n = characterCount(s);
+    if (n > COMMENT_MAX) {
+      ctx.addIssue({
+        code: 'custom',
+        message: `A comment can be at most ${formatCount(COMMENT_MAX)} characters; this one has ${formatCount(n)}. Shorten it a little and send it again.`,
+      });
+    }
+  });
+
+export const CreateCommentSchema = z.object({ body: CommentBodySchema }).strict();
+export type CreateCommentInput = z.infer<typeof CreateCommentSchema>;
+
+export const UpdateCommentSchema = z.object({ hidden: z.boolean({ message: 'Say whether the comment is hidden (true or false).' }) }).strict();
+
+const Reason = z
+  .string({ message: 'Say in a few words what is wrong.' })
+  .trim()
+  .min(3, { message: 'Say in a few words what is wrong.' })
+  .max(REPORT_REASON_MAX, { message: `Keep the reason under ${REPORT_REASON_MAX} characters.` });
+
+/** A report names either one comment or one shared page (by its link token), never both. */
+export const CreateReportSchema = z
+  .object({
+    commentId: z.number().int().positive().optional(),
+    shareToken: z.string().min(1).max(100).optional(),
+    reason: Reason,
+  })
+  .strict()
+  .refine((v) => (v.commentId === undefined) !== (v.shareToken === undefined), {
+    message: 'Report either one comment or one page.',
+    path: ['commentId'],
+  });
+export type CreateReportInput = z.infer<typeof CreateReportSchema>;
+
+export const ReportFormSchema = z.object({ reason: Reason });
+export type ReportFormValues = z.infer<typeof ReportFormSchema>;
+
+export const ResolveReportSchema = z.object({
+  action: z.enum(['hide', 'dismiss'], { message: 'Choose "hide" or "dismiss".' }),
+}).strict();
+
+export const ReportStatusSchema = z.enum(['open', 'hidden', 'dismissed']);
+export const ReportListQuerySchema = z.object({ status: z.enum(['open', 'handled', 'all']).default('open') });
+
+export const ShareSettingsSchema = z.object({ notifyComments: z.boolean({ message: 'Say whether to send comment e-mails (true or false).' }) }).strict();
+export type ShareSettings = z.infer<typeof ShareSettingsSchema>;
+
+/** Share tokens are URL-safe random strings; anything else is answered 404 without touching the database. */
+export const ShareTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{16,64}$/);
