@@ -122,6 +122,28 @@ export interface PhotoOut {
   alt: string;
 }
 
+/** A photo as the journal lists it: PhotoOut plus whether it is the project's cover. */
+export interface JournalPhoto extends PhotoOut {
+  entryId: number;
+  cover: boolean;
+}
+
+export interface JournalEntry {
+  id: number;
+  projectId: number;
+  pieceId: number | null;
+  pieceName: string | null;
+  body: string;
+  /** YYYY-MM-DD, the maker's day. */
+  entryDate: string;
+  minutes: number | null;
+  tags: Array<'progress' | 'change' | 'placement' | 'problem' | 'finished'>;
+  onShowcase: boolean;
+  photos: JournalPhoto[];
+  createdAt: string;
+  updatedAt: string;
+}
+
 export interface Project {
   id: number;
   title: string;
