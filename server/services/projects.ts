@@ -1,7 +1,23 @@
+import crypto from 'node:crypto';
+import fs from 'node:fs/promises';
+import path from 'node:path';
 import type { Knex } from 'knex';
+import type { AppContext } from '../context.js';
 import type { ProjectStatus } from '../../src/schemas/common.js';
+import { MaterialsSchema, type Materials } from '../../src/schemas/materials.js';
+import type { CreateProjectSchema, ProjectPieceInputSchema, UpdateProjectSchema } from '../../src/schemas/project.js';
+import { cautionsFor } from '../../src/reference/safety.js';
+import { hook } from '../../src/reference/hooks.js';
+import { checkPiece } from '../../src/engine/index.js';
+import type { Placement, PieceProgress, Project, ProjectPiece } from '../../src/types/api.js';
+import type { z } from 'zod';
+import { HttpError, notFound } from '../lib/http-error.js';
+import { ownedProject } from './ownership.js';
 
-// Foundation: the list the home screen ("On the hook") needs. The projects work extends this module.
+type CreateInput = z.output<typeof CreateProjectSchema>;
+type UpdateInput = z.output<typeof UpdateProjectSchema>;
+type PieceInput = z.output<typeof ProjectPieceInputSchema>;
+type Row = Record<string, any>;
 
 export interface ProjectListItem {
   id: number;
@@ -11,6 +27,30 @@ export interface ProjectListItem {
   finishedOn: string | null;
   updatedAt: string;
   pieceCount: number;
+  recipient: string | null;
+  patternTitle: string | null;
+  forYoungChild: boolean;
+  visibility: 'private' | 'link' | 'public';
+  /** How many cautions the project page will show (small parts, young child). */
+  cautionCount: number;
+}
+
+const nowIso = () => new Date().toISOString();
+const today = () => new Date().toISOString().slice(0, 10);
+
+function parseJson<T>(text: string | null | undefined, fallback: T): T {
+  if (!text) return fallback;
+  try {
+    return JSON.parse(text) as T;
+  } catch {
+    return fallback;
+  }
+}
+
+/** Stored materials, normalised to the shared shape (older or partial JSON still reads). */
+function readMaterials(text: string | null | undefined): Materials {
+  const parsed = MaterialsSchema.safeParse(parseJson(text, {}));
+  return parsed.success ? parsed.data : { yarns: [], hooks: [], notions: [] };
 }
 
 export async function listProjects(db: Knex, ownerId: string, status?: ProjectStatus): Promise<ProjectListItem[]> {
@@ -19,10 +59,11 @@ export async function listProjects(db: Knex, ownerId: string, status?: ProjectSt
     .modify((q) => {
       if (status) q.andWhere('p.status', status);
     })
-    .select('p.id', 'p.title', 'p.status', 'p.started_on', 'p.finished_on', 'p.updated_at')
+    .select('p.id', 'p.title', 'p.status', 'p.started_on', 'p.finished_on', 'p.updated_at', 'p.recipient', 'p.pattern_credit', 'p.for_young_child', 'p.visibility', 'p.materials')
     .select(db.raw('(select count(*) from project_pieces pp where pp.project_id = p.id) as piece_count'))
-    .orderBy('p.updated_at', 'desc');
-  return rows.map((r: Record<string, any>) => ({
+    .orderBy('p.updated_at', 'desc')
+    .orderBy('p.id', 'desc');
+  return rows.map((r: Row) => ({
     id: r.id,
     title: r.title,
     status: r.status,
@@ -30,5 +71,277 @@ export async function listProjects(db: Knex, ownerId: string, status?: ProjectSt
     finishedOn: r.finished_on,
     updatedAt: r.updated_at,
     pieceCount: Number(r.piece_count),
+    recipient: r.recipient ?? null,
+    patternTitle: parseJson<{ title?: string } | null>(r.pattern_credit, null)?.title ?? null,
+    forYoungChild: Boolean(r.for_young_child),
+    visibility: r.visibility,
+    cautionCount: cautionsFor({ forYoungChild: Boolean(r.for_young_child), notions: readMaterials(r.materials).notions }).length,
   }));
+}
+
+const defaultProgress = (): PieceProgress => ({ copy: 1, round: 0, step: 0, done: 0, version: 0, updatedAt: null });
+
+function toPlacement(r: Row): Placement {
+  return { id: r.id, pieceId: r.piece_id, copy: r.copy, round: r.round, step: r.step ?? null, label: r.label, note: r.note ?? null, createdAt: r.created_at };
+}
+
+/**
+ * Rounds done count the current copy only ("Rnd 7 of 17 · copy 1 of 2"); a copy is done once the Tally has moved
+ * past its last round, or on to the next copy.
+ */
+export function pieceTotals(instructions: string, terms: 'us' | 'uk', copies: number, progress: PieceProgress) {
+  const check = checkPiece(instructions, { terms });
+  const rounds = check.rounds.length;
+  const pastEnd = rounds > 0 && progress.round >= rounds;
+  const copiesDone = Math.max(0, Math.min(copies, progress.copy - 1 + (pastEnd ? 1 : 0)));
+  const roundsDone = copiesDone >= copies ? rounds : Math.max(0, Math.min(rounds, progress.round));
+  return { rounds, stepsPerCopy: check.totalSteps, copiesDone, roundsDone };
+}
+
+function shareUrl(env: AppContext['env'], row: Row): string | null {
+  if (row.visibility === 'private' || !row.share_token) return null;
+  const p = `/p/${row.share_token}`;
+  return env.APP_ORIGIN ? `${env.APP_ORIGIN}${p}` : p;
+}
+
+async function serializeProject(ctx: AppContext, row: Row): Promise<Project> {
+  const { db } = ctx;
+  const pieceRows: Row[] = await db('project_pieces').where({ project_id: row.id }).orderBy([{ column: 'position' }, { column: 'id' }]);
+  const ids = pieceRows.map((p) => p.id);
+  const progressRows: Row[] = ids.length ? await db('piece_progress').whereIn('piece_id', ids) : [];
+  const placementRows: Row[] = ids.length ? await db('placements').whereIn('piece_id', ids).orderBy([{ column: 'created_at' }, { column: 'id' }]) : [];
+  const progressBy = new Map(progressRows.map((p) => [p.piece_id, p]));
+  const materials = readMaterials(row.materials);
+
+  const pieces: ProjectPiece[] = pieceRows.map((p) => {
+    const pr = progressBy.get(p.id);
+    const progress: PieceProgress = pr
+      ? { copy: pr.copy, round: pr.round, step: pr.step, done: pr.done, version: pr.version, updatedAt: pr.updated_at ?? null }
+      : defaultProgress();
+    return {
+      id: p.id,
+      position: p.position,
+      name: p.name,
+      copies: p.copies,
+      hookMm: p.hook_mm ?? null,
+      hook: p.hook_mm != null ? hook(p.hook_mm) : null,
+      yarns: parseJson<string[]>(p.yarns, []),
+      instructions: p.instructions,
+      progress,
+      totals: pieceTotals(p.instructions, row.terms, p.copies, progress),
+      placements: placementRows.filter((pl) => pl.piece_id === p.id).map(toPlacement),
+    };
+  });
+
+  return {
+    id: row.id,
+    title: row.title,
+    status: row.status,
+    patternId: row.pattern_id ?? null,
+    patternCredit: parseJson(row.pattern_credit, null),
+    terms: row.terms,
+    startedOn: row.started_on ?? null,
+    finishedOn: row.finished_on ?? null,
+    recipient: row.recipient ?? null,
+    forYoungChild: Boolean(row.for_young_child),
+    materials,
+    notes: row.notes ?? null,
+    visibility: row.visibility,
+    shareUrl: shareUrl(ctx.env, row),
+    // The photo URLs belong to the photos work (issue 7); until it serves them there is no cover to show.
+    coverPhoto: null,
+    pieces,
+    cautions: cautionsFor({ forYoungChild: Boolean(row.for_young_child), notions: materials.notions }),
+    createdAt: row.created_at,
+    updatedAt: row.updated_at,
+  };
+}
+
+/** A pattern a member may start a project from: their own, or a public one. Anything else is "not found". */
+async function startablePattern(db: Knex, userId: string, patternId: number) {
+  const row = await db('patterns')
+    .where({ id: patternId })
+    .andWhere((q) => q.where('owner_id', userId).orWhere('visibility', 'public'))
+    .first();
+  if (!row) throw notFound('That pattern');
+  return row;
+}
+
+/** Shelf yarns named in materials must be on this member's own shelf. */
+async function checkShelfYarns(db: Knex, userId: string, materials: Materials) {
+  const ids = [...new Set(materials.yarns.map((y) => y.shelfYarnId).filter((id): id is number => id != null))];
+  if (!ids.length) return;
+  const found = await db('yarns').where('owner_id', userId).whereIn('id', ids).pluck('id');
+  const missing = ids.filter((id) => !found.includes(id));
+  if (missing.length) {
+    const at = materials.yarns.findIndex((y) => y.shelfYarnId === missing[0]);
+    throw new HttpError(422, 'That yarn is not on your yarn shelf. Pick one from your shelf or type it in.', [
+      { path: `materials.yarns.${at}.shelfYarnId`, message: 'Not on your yarn shelf.' },
+    ]);
+  }
+}
+
+function mergeMaterials(base: Materials, patch?: Partial<Materials>, notions?: Materials['notions']): Materials {
+  return MaterialsSchema.parse({
+    yarns: patch?.yarns ?? base.yarns,
+    hooks: patch?.hooks ?? base.hooks,
+    notions: notions ?? patch?.notions ?? base.notions,
+  });
+}
+
+const pieceRow = (projectId: number, piece: PieceInput, position: number) => ({
+  project_id: projectId,
+  position,
+  name: piece.name,
+  copies: piece.copies,
+  hook_mm: piece.hookMm ?? null,
+  yarns: JSON.stringify(piece.yarns ?? []),
+  instructions: piece.instructions,
+});
+
+/** Dates a status change implies, unless the maker gave them in the same request. */
+function datesForStatus(status: ProjectStatus | undefined, current: { started_on?: string | null; finished_on?: string | null }, given: { startedOn?: string | null; finishedOn?: string | null }) {
+  const out: Record<string, string> = {};
+  if (status === 'on_the_hook' && !current.started_on && given.startedOn === undefined) out.started_on = today();
+  if (status === 'finished' && !current.finished_on && given.finishedOn === undefined) out.finished_on = today();
+  return out;
+}
+
+export async function getProject(ctx: AppContext, userId: string, projectId: number) {
+  const row = await ownedProject(ctx.db, userId, projectId);
+  return serializeProject(ctx, row);
+}
+
+export async function createProject(ctx: AppContext, userId: string, input: CreateInput) {
+  const { db } = ctx;
+  const projectId = await db.transaction(async (trx) => {
+    let base: Materials = { yarns: [], hooks: [], notions: [] };
+    let pieces: PieceInput[] = input.pieces ?? [];
+    let terms = input.terms ?? 'us';
+    let patternCredit: string | null = null;
+    if (input.patternId) {
+      const pattern = await startablePattern(trx, userId, input.patternId);
+      const patternPieces: Row[] = await trx('pattern_pieces').where({ pattern_id: pattern.id }).orderBy([{ column: 'position' }, { column: 'id' }]);
+      // The project keeps its own copy: later edits to the pattern never shift a started project's counts.
+      pieces = patternPieces.map((pp) => ({
+        name: pp.name,
+        copies: pp.copies,
+        hookMm: pp.hook_mm ?? null,
+        yarns: parseJson<string[]>(pp.yarns, []),
+        instructions: pp.instructions,
+      }));
+      base = readMaterials(pattern.materials);
+      terms = input.terms ?? pattern.terms;
+      patternCredit = JSON.stringify({ title: pattern.title, designerCredit: pattern.designer_credit ?? null, sourceUrl: pattern.source_url ?? null });
+    }
+    const materials = mergeMaterials(base, input.materials, input.notions);
+    await checkShelfYarns(trx, userId, materials);
+    const status = input.status ?? 'planned';
+    const [{ id }] = await trx('projects')
+      .insert({
+        owner_id: userId,
+        pattern_id: input.patternId ?? null,
+        title: input.title,
+        status,
+        terms,
+        pattern_credit: patternCredit,
+        started_on: input.startedOn ?? null,
+        finished_on: input.finishedOn ?? null,
+        recipient: input.recipient || null,
+        for_young_child: input.forYoungChild ?? false,
+        materials: JSON.stringify(materials),
+        notes: input.notes || null,
+        ...datesForStatus(status, {}, input),
+      })
+      .returning('id');
+    if (pieces.length) await trx('project_pieces').insert(pieces.map((p, i) => pieceRow(id, p, i)));
+    return id as number;
+  });
+  return getProject(ctx, userId, projectId);
+}
+
+export async function updateProject(ctx: AppContext, userId: string, projectId: number, input: UpdateInput) {
+  await ctx.db.transaction(async (trx) => {
+    const row = await ownedProject(trx, userId, projectId);
+    const patch: Row = { updated_at: nowIso() };
+    if (input.title !== undefined) patch.title = input.title;
+    if (input.terms !== undefined) patch.terms = input.terms;
+    if (input.forYoungChild !== undefined) patch.for_young_child = input.forYoungChild;
+    if (input.startedOn !== undefined) patch.started_on = input.startedOn;
+    if (input.finishedOn !== undefined) patch.finished_on = input.finishedOn;
+    if (input.recipient !== undefined) patch.recipient = input.recipient || null;
+    if (input.notes !== undefined) patch.notes = input.notes || null;
+    if (input.status !== undefined) Object.assign(patch, { status: input.status }, datesForStatus(input.status, row, input));
+    if (input.materials !== undefined || input.notions !== undefined) {
+      const materials = mergeMaterials(readMaterials(row.materials), input.materials, input.notions);
+      await checkShelfYarns(trx, userId, materials);
+      patch.materials = JSON.stringify(materials);
+    }
+    if (input.visibility !== undefined) {
+      patch.visibility = input.visibility;
+      // The link is made once, on the first switch away from private; going private again keeps it but the
+      // showcase refuses it while private (rotating it is the showcase's own action).
+      if (input.visibility !== 'private' && !row.share_token) patch.share_token = crypto.randomBytes(18).toString('base64url');
+    }
+    await trx('projects').where({ id: row.id }).update(patch);
+    if (input.pieces) await replacePieces(trx, row.id, input.pieces);
+  });
+  return getProject(ctx, userId, projectId);
+}
+
+/** Pieces with an id are changed, new ones added, and the ones left out removed (with their Tally progress). */
+async function replacePieces(trx: Knex.Transaction, projectId: number, pieces: NonNullable<UpdateInput['pieces']>) {
+  const existing: Row[] = await trx('project_pieces').where({ project_id: projectId });
+  const byId = new Map(existing.map((p) => [p.id, p]));
+  const kept = new Set<number>();
+  for (const [i, piece] of pieces.entries()) {
+    if (piece.id === undefined) continue;
+    if (!byId.has(piece.id) || kept.has(piece.id)) {
+      throw new HttpError(422, 'One of those pieces is not part of this project. Reload the page and try again.', [
+        { path: `pieces.${i}.id`, message: 'Not a piece of this project.' },
+      ]);
+    }
+    kept.add(piece.id);
+  }
+  const removed = existing.filter((p) => !kept.has(p.id)).map((p) => p.id);
+  if (removed.length) await trx('project_pieces').whereIn('id', removed).delete();
+  for (const [position, piece] of pieces.entries()) {
+    if (piece.id !== undefined) {
+      const upd: Row = { position, name: piece.name };
+      if (piece.copies !== undefined) upd.copies = piece.copies;
+      if (piece.instructions !== undefined) upd.instructions = piece.instructions;
+      if (piece.hookMm !== undefined) upd.hook_mm = piece.hookMm;
+      if (piece.yarns !== undefined) upd.yarns = JSON.stringify(piece.yarns);
+      await trx('project_pieces').where({ id: piece.id }).update(upd);
+    } else {
+      await trx('project_pieces').insert(pieceRow(projectId, { ...piece, copies: piece.copies ?? 1, instructions: piece.instructions ?? '' }, position));
+    }
+  }
+}
+
+/**
+ * Removes the project (pieces, progress, journal and photo rows go with it by cascade), then its photo files.
+ * Files go only after the rows are gone, so a failed delete never leaves rows pointing at missing files.
+ */
+export async function deleteProject(ctx: AppContext, userId: string, projectId: number) {
+  const keys = await ctx.db.transaction(async (trx) => {
+    const row = await ownedProject(trx, userId, projectId);
+    const storageKeys: string[] = await trx('photos').where({ project_id: row.id }).pluck('storage_key');
+    await trx('projects').where({ id: row.id }).delete();
+    return storageKeys;
+  });
+  await deletePhotoFiles(ctx, keys);
+}
+
+// The photos work (issue 7) owns server/lib/storage.ts; it had no project-level delete when this was written,
+// so the two files each photo keeps (display and thumbnail) are removed here by their server-made keys.
+async function deletePhotoFiles(ctx: AppContext, keys: string[]) {
+  const root = path.resolve(ctx.env.uploadsDir);
+  for (const key of keys) {
+    for (const suffix of ['-display.jpg', '-thumb.jpg']) {
+      const file = path.resolve(root, `${key}${suffix}`);
+      if (!file.startsWith(root + path.sep)) continue; // keys are server-made; never follow one out of the folder
+      await fs.rm(file, { force: true }).catch((err) => ctx.logger.warn({ err, file }, 'could not remove a photo file'));
+    }
+  }
 }
