@@ -23,6 +23,9 @@ const memberScreens: RouteObject[] = [
   { index: true, ...screen(() => import('./routes/on-the-hook')) },
   // accounts (issue 3): /account
   // patterns (issue 5): /patterns, /patterns/new, /patterns/:patternId
+  { path: '/patterns', ...screen(() => import('./routes/patterns')) },
+  { path: '/patterns/new', ...screen(() => import('./routes/pattern-new')) },
+  { path: '/patterns/:patternId', ...screen(() => import('./routes/pattern-edit')) },
   // projects (issue 5): /projects, /projects/new, /projects/:projectId, /yarns
 ];
 
