@@ -128,7 +128,8 @@ export interface ShowcaseView {
   cautions: Caution[];
   cheers: { count: number; cheered: boolean };
   commentCount: number;
-  viewer: { signedIn: boolean; isOwner: boolean };
+  /** ownerProjectId lets the owner jump back to their project; it is null for everyone else. */
+  viewer: { signedIn: boolean; isOwner: boolean; ownerProjectId: number | null };
 }
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
@@ -261,7 +262,7 @@ export async function showcaseView(ctx: AppContext, token: string, viewer: User 
     cautions: cautionsFor({ forYoungChild: Boolean(project.for_young_child), notions: materials.notions }),
     cheers: await cheerSummary(db, project.id, viewer?.id ?? null),
     commentCount: Number(commentCount),
-    viewer: { signedIn: Boolean(viewer), isOwner: viewer?.id === project.owner_id },
+    viewer: { signedIn: Boolean(viewer), isOwner: viewer?.id === project.owner_id, ownerProjectId: viewer?.id === project.owner_id ? project.id : null },
   };
 }
 

@@ -18,4 +18,6 @@ export const paths = {
   tally: (projectId: number | string, pieceId: number | string) => `/projects/${projectId}/pieces/${pieceId}/count`,
   yarnShelf: '/yarns',
   showcase: (token: string) => `/p/${token}`,
+  makerProfile: (makerId: string) => `/m/${makerId}`,
+  adminReports: '/admin/reports',
 } as const;

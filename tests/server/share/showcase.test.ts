@@ -20,7 +20,7 @@ describe('GET /api/share/:token — each visibility', () => {
     expect(res.status).toBe(200);
     expect(res.body.showcase.title).toMatch(/Moss the hedgehog/);
     expect(res.body.showcase.visibility).toBe('link');
-    expect(res.body.showcase.viewer).toEqual({ signedIn: false, isOwner: false });
+    expect(res.body.showcase.viewer).toEqual({ signedIn: false, isOwner: false, ownerProjectId: null });
   });
 
   it('shows a public project too, and lists it on the maker profile', async () => {

@@ -1,0 +1,104 @@
+// Shapes of the showcase API's answers (server/services/share.ts, comments.ts, reports.ts serialize exactly these).
+import type { NotionKind } from '@/schemas/materials';
+import type { ProjectStatus } from '@/schemas/common';
+
+export interface ShowcaseCaution {
+  code: string;
+  title: string;
+  message: string;
+}
+
+export interface ShowcasePhoto {
+  id: number;
+  url: string;
+  thumbUrl: string;
+  width: number;
+  height: number;
+  alt: string;
+  cover: boolean;
+}
+
+export interface ShowcaseYarn {
+  name: string;
+  colour: string | null;
+  fibre: string | null;
+  weight: { category: number; label: string; approximate: boolean } | null;
+  amount: string | null;
+}
+
+export interface Showcase {
+  token: string;
+  /** Absolute link to this page. */
+  url: string;
+  visibility: 'link' | 'public';
+  title: string;
+  status: ProjectStatus;
+  statusLabel: string;
+  startedOn: string | null;
+  finishedOn: string | null;
+  workingMinutes: number;
+  maker: { displayName: string; profileUrl: string | null };
+  pattern: { title: string; designerCredit: string | null; sourceUrl: string | null } | null;
+  materials: {
+    yarns: ShowcaseYarn[];
+    hooks: Array<{ mm: number; us: string | null; note: string | null }>;
+    notions: Array<{ kind: NotionKind; label: string; sizeMm: number | null; quantity: number | null; note: string | null }>;
+  };
+  pieces: Array<{ name: string; copies: number }>;
+  placements: Array<{ label: string; piece: string; copy: number; copies: number; round: number; step: number | null; note: string | null; text: string }>;
+  changes: Array<{ id: number; date: string; body: string }>;
+  journal: Array<{ id: number; date: string; body: string; minutes: number | null; tags: string[] }>;
+  photos: ShowcasePhoto[];
+  cautions: ShowcaseCaution[];
+  cheers: CheerSummary;
+  commentCount: number;
+  viewer: { signedIn: boolean; isOwner: boolean; ownerProjectId: number | null };
+}
+
+export interface CheerSummary {
+  count: number;
+  cheered: boolean;
+}
+
+export interface ShowcaseComment {
+  id: number;
+  body: string;
+  author: { displayName: string };
+  createdAt: string;
+  hidden: boolean;
+  hiddenByAdmin: boolean;
+  mine: boolean;
+  canDelete: boolean;
+  canHide: boolean;
+}
+
+export interface ShareStatus {
+  visibility: 'private' | 'link' | 'public';
+  sharePath: string | null;
+  shareUrl: string | null;
+  hiddenByAdmin: boolean;
+  cheerCount: number;
+  commentCount: number;
+  hiddenCommentCount: number;
+  shownEntryCount: number;
+  photoCount: number;
+}
+
+export interface MakerProfile {
+  maker: { id: string; displayName: string };
+  projects: Array<{ title: string; url: string; statusLabel: string; finishedOn: string | null; cover: { url: string; thumbUrl: string; alt: string } | null; cheerCount: number }>;
+}
+
+export interface Report {
+  id: number;
+  target: 'comment' | 'project';
+  reason: string;
+  status: 'open' | 'hidden' | 'dismissed';
+  createdAt: string;
+  handledAt: string | null;
+  reporter: { displayName: string };
+  handledBy: { displayName: string } | null;
+  page: { title: string; path: string | null; ownerDisplayName: string; hidden: boolean } | null;
+  comment: { id: number; body: string; authorDisplayName: string; hidden: boolean } | null;
+  openReportsOnTarget: number;
+}
