@@ -17,6 +17,8 @@ const publicScreens: RouteObject[] = [
 
 const standaloneScreens: RouteObject[] = [
   // full-screen pages outside the app shell, e.g. the Tally (issue 6) and the showcase /p/:token (issue 8)
+  { path: '/p/:token', ...screen(() => import('./routes/showcase')) },
+  { path: '/m/:makerId', ...screen(() => import('./routes/maker-profile')) },
 ];
 
 const memberScreens: RouteObject[] = [
@@ -31,6 +33,7 @@ const memberScreens: RouteObject[] = [
 
 const adminScreens: RouteObject[] = [
   // accounts (issue 3): /admin
+  { path: '/admin/reports', ...screen(() => import('./routes/admin-reports')) },
 ];
 
 export const routes: RouteObject[] = [
