@@ -22,7 +22,8 @@ export interface ShowcaseFixture {
   pieceIds: { body: number; ear: number };
 }
 
-const key = () => crypto.randomBytes(16).toString('hex');
+// The same shape as server-made storage keys (18 random bytes, base64url).
+const key = () => crypto.randomBytes(18).toString('base64url');
 
 export async function createShowcaseProject(
   db: Knex,

@@ -137,8 +137,8 @@ describe('what the public view holds', () => {
   it('shows the cover first, then project photos and photos of marked entries — never those of private entries', () => {
     expect(body.photos.map((p: { alt: string }) => p.alt)).toEqual(['Moss the hedgehog on a windowsill', 'The body after stuffing']);
     expect(body.photos[0].cover).toBe(true);
-    expect(body.photos[0].url).toMatch(/^\/media\/photos\/[0-9a-f]{32}\/display\.jpg$/);
-    expect(body.photos[0].thumbUrl).toMatch(/^\/media\/photos\/[0-9a-f]{32}\/thumb\.jpg$/);
+    expect(body.photos[0].url).toMatch(/^\/media\/photos\/[A-Za-z0-9_-]{24}\/display\.jpg$/);
+    expect(body.photos[0].thumbUrl).toMatch(/^\/media\/photos\/[A-Za-z0-9_-]{24}\/thumb\.jpg$/);
     expect(JSON.stringify(body)).not.toContain('Receipt for the yarn');
   });
 
