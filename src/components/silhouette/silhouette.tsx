@@ -12,6 +12,24 @@ const PAD = 14;
 
 const short = (s: string, n = 20) => (s.length > n ? `${s.slice(0, n - 1)}…` : s);
 
+type Pt = [number, number];
+
+/** A smooth line through the points (Catmull-Rom as cubic Béziers): stuffed fabric curves, it has no corners. */
+function smooth(points: Pt[]): string {
+  if (points.length < 3) return points.map((p) => `L ${p[0]},${p[1]}`).join(' ');
+  let d = '';
+  for (let i = 0; i < points.length - 1; i++) {
+    const p0 = points[Math.max(0, i - 1)];
+    const p1 = points[i];
+    const p2 = points[i + 1];
+    const p3 = points[Math.min(points.length - 1, i + 2)];
+    const c1: Pt = [p1[0] + (p2[0] - p0[0]) / 6, p1[1] + (p2[1] - p0[1]) / 6];
+    const c2: Pt = [p2[0] - (p3[0] - p1[0]) / 6, p2[1] - (p3[1] - p1[1]) / 6];
+    d += ` C ${c1[0]},${c1[1]} ${c2[0]},${c2[1]} ${p2[0]},${p2[1]}`;
+  }
+  return d;
+}
+
 /**
  * The silhouette: a side profile drawn from a piece's stitch counts, with its estimated finished size and
  * marks at given rounds (placement notes, placements recorded while counting).
@@ -51,12 +69,24 @@ export function Silhouette({
   const hPx = shape.heightCm * scale;
   const vbH = hPx + PAD * 2;
   const y = (cm: number) => PAD + cm * scale;
-  const right = shape.points.map((p) => `${AXIS_X + p.radiusCm * scale},${y(p.yCm)}`);
-  const left = [...shape.points].reverse().map((p) => `${AXIS_X - p.radiusCm * scale},${y(p.yCm)}`);
-  const path = `M ${right.join(' L ')} L ${left.join(' L ')} Z`;
+  const right: Pt[] = shape.points.map((p) => [AXIS_X + p.radiusCm * scale, y(p.yCm)]);
+  const left: Pt[] = [...shape.points].reverse().map((p) => [AXIS_X - p.radiusCm * scale, y(p.yCm)]);
+  // First and last rounds are drawn as straight edges: the opening (or the closed ring) of the piece.
+  const path = `M ${right[0][0]},${right[0][1]}${smooth(right)} L ${left[0][0]},${left[0][1]}${smooth(left)} Z`;
   const first = shape.points[0];
   const last = shape.points[shape.points.length - 1];
-  const ticks = shape.points.filter((p, i) => i === 0 || i === shape.points.length - 1 || p.round % 5 === 0);
+  // Round numbers down the side: the first, the last and every fifth, never so close that they overlap.
+  const ticks: typeof shape.points = [];
+  for (const [i, p] of shape.points.entries()) {
+    const isLast = i === shape.points.length - 1;
+    if (!(i === 0 || isLast || p.round % 5 === 0)) continue;
+    const prev = ticks[ticks.length - 1];
+    if (prev && (y(p.yCm) - y(prev.yCm)) < 13) {
+      if (!isLast || ticks.length === 1) continue;
+      ticks.pop();
+    }
+    ticks.push(p);
+  }
   const dims = `about ${roundTo(shape.widthCm)} cm wide and ${roundTo(shape.heightCm)} cm tall (${roundTo(shape.widthIn)} × ${roundTo(shape.heightIn)} in)`;
 
   return (

@@ -12,6 +12,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
+import { cn } from '@/utils/cn';
 import { GaugeFields } from './gauge-fields';
 import { MaterialsEditor } from './materials-editor';
 import { blankPiece, PiecesEditor } from './pieces-editor';
@@ -192,8 +193,14 @@ export function PatternEditor({
 
         {footer}
 
-        <div className="sticky bottom-24 z-10 flex flex-wrap items-center gap-3 rounded-blob bg-oat/95 p-3 shadow-lg ring-1 ring-wool backdrop-blur sm:bottom-4 dark:bg-ink/95 dark:ring-[#4a423c]">
-          <Button type="submit" size="lg" pending={saving}>
+        {/* The bar follows the page only while there is something to save, so reading the pattern keeps the whole screen. */}
+        <div
+          className={cn(
+            'z-10 flex flex-wrap items-center gap-3 rounded-blob p-2 sm:p-3',
+            isDirty && 'sticky bottom-24 bg-oat/95 shadow-lg ring-1 ring-wool backdrop-blur sm:bottom-4 dark:bg-ink/95 dark:ring-[#4a423c]',
+          )}
+        >
+          <Button type="submit" pending={saving}>
             <Save aria-hidden className="h-5 w-5" /> {pattern ? 'Save changes' : 'Save pattern'}
           </Button>
           <p className="text-sm" aria-live="polite">

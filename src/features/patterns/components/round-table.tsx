@@ -148,7 +148,7 @@ function NoteRow({ note, onJump }: { note: Note; onJump?: (line: number, column:
 
 function RoundRows({ row, onJump }: { row: TableRow; onJump?: (line: number, column: number | null) => void }) {
   const flagged = row.problems.length > 0;
-  const cell = cn('border-t border-wool py-2 align-top dark:border-[#4a423c]', flagged && 'bg-[#f3dccf]/60 dark:bg-clay/15');
+  const cell = cn('border-t border-wool py-2 align-middle dark:border-[#4a423c]', flagged && 'bg-[#f3dccf]/60 dark:bg-clay/15');
   const label = (
     <>
       <span className="font-semibold">{row.label}</span>
