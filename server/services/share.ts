@@ -154,10 +154,14 @@ function yarnOut(y: Materials['yarns'][number]): ShowcaseYarn {
   return { name: y.name, colour: y.colour ?? null, fibre: y.fibre ?? null, weight, amount: yarnAmount(y) };
 }
 
-/** "Left eye: Body (copy 2), between Rnds 9 and 10, at stitch 14 — 6 stitches apart" */
+/**
+ * "Left eye: Body (copy 2), between Rnds 9 and 10, at stitch 14 — 6 stitches apart". The Tally records a mark in
+ * the round being worked, and shows a pattern's "between Rnds 9 and 10" note at Rnd 10, so a mark at Rnd 10 sits
+ * between Rnds 9 and 10. A mark in the first round has no round before it.
+ */
 export function placementText(p: { label: string; piece: string; copy: number; copies: number; round: number; step: number | null; note: string | null }) {
   const piece = p.copies > 1 ? `${p.piece} (copy ${p.copy})` : p.piece;
-  let text = `${p.label}: ${piece}, between Rnds ${p.round} and ${p.round + 1}`;
+  let text = `${p.label}: ${piece}, ${p.round > 1 ? `between Rnds ${p.round - 1} and ${p.round}` : `in Rnd ${p.round}`}`;
   if (p.step) text += `, at stitch ${p.step}`;
   if (p.note) text += ` — ${p.note}`;
   return text;

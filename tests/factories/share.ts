@@ -68,7 +68,7 @@ export async function createShowcaseProject(
     ])
     .returning('id');
   await db('placements').insert([
-    { piece_id: body, copy: 1, round: 9, step: 14, label: 'Left eye', note: '6 stitches apart' },
+    { piece_id: body, copy: 1, round: 10, step: 14, label: 'Left eye', note: '6 stitches apart' },
     { piece_id: ear, copy: 2, round: 3, step: null, label: 'Ear', note: null },
   ]);
   const entries = await db('journal_entries')

@@ -3,6 +3,7 @@ import request from 'supertest';
 import { createTestContext, type TestContext } from '../../setup/test-app.js';
 import { createTestUser, signedInAgent } from '../../factories/users.js';
 import { createShowcaseProject, PRIVATE_MARKERS } from '../../factories/share.js';
+import { placementText } from '../../../server/services/share.js';
 
 let t: TestContext;
 beforeAll(async () => {
@@ -130,8 +131,12 @@ describe('what the public view holds', () => {
     ]);
     expect(body.placements.map((p: { text: string }) => p.text)).toEqual([
       'Left eye: Body, between Rnds 9 and 10, at stitch 14 — 6 stitches apart',
-      'Ear: Ear (copy 2), between Rnds 3 and 4',
+      'Ear: Ear (copy 2), between Rnds 2 and 3',
     ]);
+  });
+
+  it('words a mark in the first round without a round before it', () => {
+    expect(placementText({ label: 'Nose', piece: 'Head', copy: 1, copies: 1, round: 1, step: 3, note: null })).toBe('Nose: Head, in Rnd 1, at stitch 3');
   });
 
   it('shows the cover first, then project photos and photos of marked entries — never those of private entries', () => {
