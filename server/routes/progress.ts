@@ -99,7 +99,7 @@ export function progressRouter(ctx: AppContext) {
   });
 
   router.delete('/placements/:id', requireUser, validate({ params: IdParams }), async (req, res) => {
-    await deletePlacement(ctx.db, currentUser(res).id, (req.params as z.infer<typeof IdParams>).id);
+    await deletePlacement(ctx.db, currentUser(res).id, (req.params as unknown as z.infer<typeof IdParams>).id);
     res.status(204).end();
   });
 

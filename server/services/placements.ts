@@ -54,20 +54,21 @@ export async function createPlacement(db: Knex, userId: string, pieceId: number,
     const message = `This piece is made ${piece.copies === 1 ? 'once' : `${piece.copies} times`}, so there is no copy ${input.copy}.`;
     throw new HttpError(422, message, [{ path: 'copy', message }]);
   }
-  const existing = input.opId ? await db<PlacementRow>('placements').where({ piece_id: pieceId, op_id: input.opId }).first() : undefined;
+  const byOpId = (opId: string) => db('placements').where({ piece_id: pieceId, op_id: opId }).first() as Promise<PlacementRow | undefined>;
+  const existing = input.opId ? await byOpId(input.opId) : undefined;
   if (existing) return { placement: toPlacement(existing), created: false };
   // Without a copy, the mark belongs to the copy the Tally is on.
   const copy = input.copy ?? (await db('piece_progress').where({ piece_id: pieceId }).first('copy'))?.copy ?? 1;
   try {
-    const [row] = await db<PlacementRow>('placements')
-      .insert({ piece_id: pieceId, copy, round: input.round, step: input.step ?? null, label: input.label, note: input.note || null, op_id: input.opId ?? null } as never)
-      .returning('*');
+    const [row] = (await db('placements')
+      .insert({ piece_id: pieceId, copy, round: input.round, step: input.step ?? null, label: input.label, note: input.note || null, op_id: input.opId ?? null })
+      .returning('*')) as PlacementRow[];
     announce(db, pieceId);
     return { placement: toPlacement(row), created: true };
   } catch (e) {
     const code = (e as { code?: string })?.code ?? '';
     if (input.opId && code.startsWith('SQLITE_CONSTRAINT')) {
-      const again = await db<PlacementRow>('placements').where({ piece_id: pieceId, op_id: input.opId }).first();
+      const again = await byOpId(input.opId);
       if (again) return { placement: toPlacement(again), created: false };
     }
     throw e;

@@ -103,7 +103,7 @@ function toOut(row: ProgressRow | undefined): ProgressOut {
 const readRow = (db: Knex, pieceId: number) => db<ProgressRow>('piece_progress').where({ piece_id: pieceId }).first();
 
 /** Totals the project page and the Tally agree on, from the same shape the server counts with. */
-export function pieceTotals(shape: PieceShape, progress: Pick<ProgressOut, 'copy' | 'round' | 'step' | 'done'>) {
+export function tallyTotals(shape: PieceShape, progress: Pick<ProgressOut, 'copy' | 'round' | 'step' | 'done'>) {
   const perCopy = stepsPerCopy(shape);
   const finished = isFinished(shape, progress);
   return {
