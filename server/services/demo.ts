@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import type { Logger } from '../lib/logger.js';
 import { createUser } from './users.js';
 import { demoPattern } from './demo-pattern.js';
+import { seedProgress } from './progress.js';
 
 export const DEMO_MAKER = { email: 'demo-maker@example.com', password: 'loops-and-rounds', displayName: 'Wren (demo maker)' };
 export const DEMO_ADMIN = { email: 'admin@example.com', password: 'admin-loops-and-rounds', displayName: 'Whorlbook admin' };
@@ -74,6 +75,13 @@ export async function seedDemo(db: Knex, logger?: Logger) {
       )
       .returning('id');
     const bodyId = pieceRows[0].id;
+
+    // The Tally mid-piece: the Body at Rnd 10 (round index 9), with the eye spots already marked on Rnd 9.
+    await seedProgress(trx, bodyId, p.pieces[0].instructions, p.pieces[0].copies, p.terms, { copy: 1, round: 9, step: 9 });
+    await trx('placements').insert([
+      { piece_id: bodyId, copy: 1, round: 9, step: 15, label: 'left eye', note: 'Locking marker where the 8 mm safety eye goes in after Rnd 12.' },
+      { piece_id: bodyId, copy: 1, round: 9, step: 21, label: 'right eye', note: '6 sts from the left eye.' },
+    ]);
 
     await trx('journal_entries').insert([
       {
