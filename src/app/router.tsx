@@ -13,6 +13,11 @@ const screen = (load: Loader): Pick<RouteObject, 'lazy'> => ({ lazy: async () =>
 const publicScreens: RouteObject[] = [
   { path: '/sign-in', ...screen(() => import('./routes/sign-in')) },
   // accounts (issue 3): sign-up, forgot/reset password, verify e-mail, dev outbox
+  { path: '/sign-up', ...screen(() => import('./routes/sign-up')) },
+  { path: '/forgot-password', ...screen(() => import('./routes/forgot-password')) },
+  { path: '/reset-password', ...screen(() => import('./routes/reset-password')) },
+  { path: '/verify-email', ...screen(() => import('./routes/verify-email')) },
+  { path: '/dev/outbox', ...screen(() => import('./routes/dev-outbox')) },
 ];
 
 const standaloneScreens: RouteObject[] = [
@@ -24,6 +29,7 @@ const standaloneScreens: RouteObject[] = [
 const memberScreens: RouteObject[] = [
   { index: true, ...screen(() => import('./routes/on-the-hook')) },
   // accounts (issue 3): /account
+  { path: '/account', ...screen(() => import('./routes/account')) },
   // patterns (issue 5): /patterns, /patterns/new, /patterns/:patternId
   { path: '/patterns', ...screen(() => import('./routes/patterns')) },
   { path: '/patterns/new', ...screen(() => import('./routes/pattern-new')) },
@@ -33,6 +39,7 @@ const memberScreens: RouteObject[] = [
 
 const adminScreens: RouteObject[] = [
   // accounts (issue 3): /admin
+  { path: '/admin', ...screen(() => import('./routes/admin')) },
   { path: '/admin/reports', ...screen(() => import('./routes/admin-reports')) },
 ];
 

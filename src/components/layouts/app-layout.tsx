@@ -3,6 +3,7 @@ import { BookOpen, Home, Layers, Moon, Sun, Shield, LogOut, User } from 'lucide-
 import type { ReactNode } from 'react';
 import { useMe } from '@/features/auth/api/get-me';
 import { useSignOut } from '@/features/auth/api/sign-out';
+import { VerifyEmailBanner } from '@/features/auth/components/verify-email-banner';
 import { useTheme } from '@/hooks/use-theme';
 import { paths } from '@/config/paths';
 import { cn } from '@/utils/cn';
@@ -77,6 +78,7 @@ export function AppLayout() {
         </div>
       </header>
       <main id="main" className="mx-auto max-w-5xl px-4 py-5">
+        <VerifyEmailBanner />
         <Outlet />
       </main>
       <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-20 flex gap-1 border-t border-wool bg-oat/95 p-2 pb-[max(0.5rem,env(safe-area-inset-bottom))] backdrop-blur sm:hidden dark:border-[#4a423c] dark:bg-ink/95">
