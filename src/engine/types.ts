@@ -69,6 +69,8 @@ export interface Note {
   hookMm?: number;
   /** For kind 'placement': what is placed and where, when it can be read. */
   placement?: { label: string; betweenRounds: [number, number] | null; atRound: number | null; apart: number | null };
+  /** The note names safety eyes, buttons, beads or other small parts: show the small-parts caution. */
+  smallParts?: boolean;
 }
 
 export interface PieceCheck {
@@ -91,6 +93,8 @@ export interface CheckOptions {
 
 export interface PlanOptions {
   staggered?: boolean;
+  /** Write the instruction in UK terms ("(3 dc, inc) x6"). Default US. */
+  terms?: Terms;
 }
 
 export interface Plan {

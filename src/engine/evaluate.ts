@@ -1,0 +1,582 @@
+// Walks a parsed round against the stitches available and produces its count, steps and count problems.
+
+import { STITCH_BY_ID, type StitchEntry } from './abbreviations';
+import type { GroupNode, Into, LeftoverNode, Node, Parsed, StNode, Units } from './ast';
+import { parseInstruction } from './parser';
+import { planRound } from './planner';
+import type { Loop, Problem, Step, Terms } from './types';
+
+export interface EvalEnv {
+  terms: Terms;
+  /** Stitches available from the previous round (or the start). */
+  prev: number;
+  /** Where those come from, for sentences: "Round 4", "the start", or null when there is nothing. */
+  prevName: string | null;
+  /** "Round 5" / "Row 5". */
+  name: string;
+  /** Leftover loops of an earlier round (see check.ts). */
+  leftover: (node: LeftoverNode) => { count: number; problem: string | null };
+  /** Steps this round may still add (the piece as a whole has a budget too). */
+  maxSteps?: number;
+}
+
+export interface EvalResult {
+  steps: Step[];
+  made: Record<string, number>;
+  loops: Loop[];
+  worked: number;
+  stitches: number;
+  problems: Problem[];
+  /** False when some choice could not be settled (only used to pick between readings). */
+  clean: boolean;
+}
+
+/** Per round: beyond this the text is almost surely a slip, and the counter could not walk it anyway. */
+export const MAX_STEPS = 20000;
+const MAX_OPS = 200000;
+
+class Budget extends Error {}
+
+type Base = 'prev' | 'ring' | 'chain' | 'leftover';
+
+const error = (message: string, column: number | null): Problem => ({ message, column, severity: 'error' });
+const warning = (message: string, column: number | null): Problem => ({ message, column, severity: 'warning' });
+
+function plural(n: number, one: string, many: string): string {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
+function ordinal(n: number): string {
+  const t = n % 100;
+  if (t >= 11 && t <= 13) return `${n}th`;
+  return `${n}${['th', 'st', 'nd', 'rd'][n % 10] ?? 'th'}`;
+}
+
+const LOOP_WORDS: Record<Loop, string> = { blo: 'back loop only', flo: 'front loop only' };
+
+class Walker {
+  pool: number;
+  pos = 0;
+  /** Stitches worked on the first side of a foundation chain, once the other side is being worked. */
+  offset = 0;
+  base: Base = 'prev';
+  ringKind: 'mr' | 'ring' = 'mr';
+  side: 1 | 2 = 1;
+  chainPool: number | null = null;
+  foundationLen: number | null = null;
+  steps: Step[] = [];
+  made: Record<string, number> = {};
+  loops = new Set<Loop>();
+  loopMode: Loop | null = null;
+  problems: Problem[] = [];
+  overCol: number | null = null;
+  fitFailed = false;
+  leave: { n: number | null; col: number } | null = null;
+  repeat: { index: number; of: number } | null = null;
+  anyWorked = false;
+  ops = 0;
+  clean = true;
+  readonly maxSteps: number;
+
+  constructor(
+    readonly env: EvalEnv,
+    readonly choices: number[],
+  ) {
+    this.pool = env.prev;
+    this.maxSteps = Math.min(MAX_STEPS, env.maxSteps ?? MAX_STEPS);
+  }
+
+  get terms(): Terms {
+    return this.env.terms;
+  }
+
+  abbr(e: StitchEntry): string {
+    return e.abbr[this.terms];
+  }
+
+  noun(): string {
+    return this.base === 'chain' ? 'chain' : 'stitch';
+  }
+
+  tick(): void {
+    if (++this.ops > MAX_OPS) throw new Budget();
+  }
+
+  step(action: string, text: string, worksInto: number, makes: number, loop: Loop | null, column: number): void {
+    if (this.steps.length >= this.maxSteps) throw new Budget();
+    this.tick();
+    const full = loop ? `${text} — ${LOOP_WORDS[loop]}` : text;
+    this.steps.push({
+      index: this.steps.length,
+      action,
+      text: full,
+      worksInto,
+      makes,
+      repeat: this.repeat,
+      loop,
+      column,
+    });
+    if (loop && (worksInto > 0 || makes > 0)) this.loops.add(loop);
+    if (worksInto > 0) {
+      this.pos += worksInto;
+      this.anyWorked = true;
+      if (this.base !== 'ring' && this.pos > this.pool && this.overCol === null) this.overCol = column;
+    }
+  }
+
+  addMade(key: string, n: number): void {
+    if (n) this.made[key] = (this.made[key] ?? 0) + n;
+  }
+
+  remaining(): number {
+    return this.pool - this.pos;
+  }
+
+  choice(id: number): number {
+    return this.choices[id] ?? 0;
+  }
+
+  /** Stitches each unit works into. */
+  worksPer(into: Into, entry: StitchEntry, at: number): number {
+    switch (into.t) {
+      case 'next':
+        return entry.works;
+      case 'same':
+        return this.anyWorked || this.base === 'ring' ? 0 : Math.min(1, entry.works);
+      case 'ring':
+        return 0;
+      case 'fromHook':
+        this.enterChain(into.nth, at);
+        return Math.min(1, entry.works);
+      case 'space':
+        return into.size;
+      case 'air':
+        return 0;
+    }
+  }
+
+  enterRing(kind: 'mr' | 'ring'): void {
+    this.base = 'ring';
+    this.ringKind = kind;
+  }
+
+  /** "in 2nd ch from hook": the chain becomes what the round works into; the chains skipped are the turn. */
+  enterChain(nth: number, at: number): void {
+    if (this.base === 'chain') return;
+    const len = this.foundationLen ?? this.env.prev;
+    const skipped = Math.max(0, nth - 1);
+    if (len <= skipped) {
+      this.problems.push(error(`The chain has ${plural(len, 'chain', 'chains')}, so there is no ${ordinal(nth)} ch from the hook`, at));
+    }
+    this.base = 'chain';
+    this.pool = Math.max(0, len - skipped);
+    this.chainPool = this.pool;
+    this.offset += this.pos;
+    this.pos = 0;
+  }
+
+  unitCount(units: Units, wpu: number, what: string, col: number): number {
+    if (units.u === 'n') return units.n;
+    const leave = units.u === 'fillTo' ? units.leave : 0;
+    if (this.base === 'ring') {
+      this.problems.push(error(`'${what}' needs stitches to work into, but this round works into the ring`, col));
+      this.clean = false;
+      return 0;
+    }
+    const rem = this.remaining() - leave;
+    if (rem <= 0) {
+      this.problems.push(warning(`'${what}' has no stitches left to work into`, col));
+      this.clean = false;
+      return 0;
+    }
+    if (wpu <= 0) return rem;
+    const count = Math.floor(rem / wpu);
+    const left = rem % wpu;
+    if (left) {
+      this.problems.push(
+        error(`'${what}' works ${wpu} stitches each time, but ${rem} are left: ${count} of them leave ${plural(left, 'stitch', 'stitches')} over`, col),
+      );
+      this.fitFailed = true;
+      this.clean = false;
+    }
+    return count;
+  }
+
+  run(nodes: Node[], loop: Loop | null): void {
+    for (const n of nodes) this.node(n, loop);
+  }
+
+  node(n: Node, loop: Loop | null): void {
+    this.tick();
+    switch (n.t) {
+      case 'st':
+        return this.stitch(n, loop);
+      case 'group':
+        return this.group(n, loop);
+      case 'skip': {
+        const count = n.n === 'fill' ? Math.max(0, this.remaining()) : n.n;
+        const what = n.noun === 'ch' ? plural(count, 'chain', 'chains') : n.noun === 'sp' ? 'the next space' : plural(count, 'stitch', 'stitches');
+        this.step('sk', count === 1 && n.noun !== 'sp' ? `skip the next ${this.noun()}` : `skip the next ${what}`, count, 0, null, n.col);
+        return;
+      }
+      case 'leave':
+        this.leave = { n: n.n, col: n.col };
+        return;
+      case 'join':
+        this.step('join', `join: ${this.terms === 'uk' ? 'ss' : 'sl st'} in the first stitch (makes no stitch)`, 0, 0, null, n.col);
+        return;
+      case 'turn':
+        return;
+      case 'loop':
+        this.loopMode = n.loop;
+        return;
+      case 'ring':
+        this.enterRing(n.formed ? 'ring' : 'mr');
+        if (n.formed) this.step('join', `join with a ${this.terms === 'uk' ? 'ss' : 'sl st'} to form a ring`, 0, 0, null, n.col);
+        return;
+      case 'otherside':
+        if (this.base !== 'chain' || this.chainPool === null) {
+          this.problems.push(warning("'the other side' only applies to a foundation chain", n.col));
+          return;
+        }
+        if (this.side === 2) return;
+        this.offset += this.pos;
+        this.pos = 0;
+        this.pool = this.chainPool;
+        this.side = 2;
+        return;
+      case 'leftover': {
+        const got = this.env.leftover(n);
+        if (got.problem) this.problems.push(warning(got.problem, n.col));
+        if (this.steps.length) this.problems.push(warning('Working in leftover loops starts a round; put it first', n.col));
+        this.offset += this.pos;
+        this.base = 'leftover';
+        this.pool = got.count;
+        this.pos = 0;
+        this.loopMode = n.loop;
+        return;
+      }
+      case 'evenly':
+        return this.evenly(n.kind, n.n, n.col, n.loop ?? loop);
+    }
+  }
+
+  evenly(kind: 'inc' | 'dec', n: number, col: number, loop: Loop | null): void {
+    const rem = this.remaining();
+    const to = kind === 'inc' ? rem + n : rem - n;
+    let plan: string;
+    try {
+      plan = planRound(rem, to).instruction;
+    } catch {
+      this.problems.push(error(`${n} ${kind === 'inc' ? 'increases' : 'decreases'} cannot be spread over ${plural(rem, 'stitch', 'stitches')}`, col));
+      this.clean = false;
+      return;
+    }
+    const parsed = parseInstruction(plan, 0, 'us');
+    const save = this.steps.length;
+    this.run(parsed.nodes, loop);
+    for (let i = save; i < this.steps.length; i++) this.steps[i] = { ...this.steps[i], column: col };
+  }
+
+  stitch(n: StNode, outerLoop: Loop | null): void {
+    const loop = n.loop ?? outerLoop ?? this.loopMode;
+    const e = n.entry;
+    if (e.id === 'ch') return this.chain(n, loop);
+    if (n.into.t === 'ring' && this.base !== 'ring') this.enterRing('mr');
+    const wpuFirst = this.worksPer(n.into, e, n.col);
+    const count = this.unitCount(n.units, wpuFirst || e.works, n.word, n.col);
+    const madeKey = n.incOf ? n.incOf.madeAs : e.madeAs;
+    const makes = e.kind === 'inc' ? 2 : n.per * e.makes;
+    const { action, text } = this.describe(n, makes);
+    if (n.into.t === 'fromHook' && n.skippedCountAlt) {
+      const pick = this.choice(n.skippedCountAlt.id);
+      const counts = pick === 0 ? n.skippedCountAlt.defaultCounts : !n.skippedCountAlt.defaultCounts;
+      if (counts) {
+        const skipped = n.into.nth - 1;
+        this.step(`ch ${skipped}`, `the ${skipped} skipped ch count as the first ${this.abbr(e)}`, 0, 1, null, n.col);
+        this.addMade(e.madeAs, 1);
+      }
+    }
+    for (let k = 1; k <= count; k++) {
+      const wpu = k === 1 ? wpuFirst : this.worksPer(n.into.t === 'fromHook' ? { t: 'next' } : n.into, e, n.col);
+      const counter = count > 1 && n.units.u === 'n' ? ` (${k} of ${count})` : '';
+      this.step(action, text + counter, wpu, makes, loop, n.col);
+      this.addMade(madeKey, makes);
+    }
+  }
+
+  describe(n: StNode, makes: number): { action: string; text: string } {
+    const e = n.entry;
+    const a = n.incOf ? this.abbr(n.incOf) : this.abbr(e);
+    const noun = this.noun();
+    const where = (): string => {
+      switch (n.into.t) {
+        case 'same':
+          return 'in the same stitch';
+        case 'ring':
+          return this.ringKind === 'mr' ? 'in the magic ring' : 'in the ring';
+        case 'fromHook':
+          return `in the ${ordinal(n.into.nth)} ch from the hook`;
+        case 'space':
+          return n.into.size > 1 ? `in the next ch-${n.into.size} space` : 'in the next space';
+        default:
+          return `in the next ${noun}`;
+      }
+    };
+    if (e.kind === 'inc') {
+      const base = n.incOf ? this.abbr(n.incOf) : this.abbr(STITCH_BY_ID.get('sc')!);
+      const action = n.incOf ? `${this.abbrUs(n.incOf)} inc` : 'inc';
+      return { action, text: `${n.incOf ? `${base} inc` : 'inc'}: 2 ${base} ${where()}` };
+    }
+    if (e.kind === 'dec') {
+      const over = e.works;
+      if (e.id === 'invdec') return { action: 'invdec', text: `invdec: invisible decrease over the next ${over} stitches (front loops)` };
+      const baseId = e.id.replace(/\dtog$/, '');
+      const base = STITCH_BY_ID.get(baseId);
+      const baseAbbr = base ? this.abbr(base) : this.abbr(e);
+      return { action: e.id, text: `${this.abbr(e)}: ${baseAbbr} the next ${over} ${noun === 'chain' ? 'chains' : 'stitches'} together` };
+    }
+    if (n.per > 1) return { action: `${n.per} ${this.abbrUs(e)}`, text: `${n.per} ${a} ${where()}` };
+    if (makes === 0) return { action: e.id, text: `${a} (not counted as a stitch)` };
+    return { action: e.id, text: `${a} ${where()}` };
+  }
+
+  abbrUs(e: StitchEntry): string {
+    return e.abbr.us;
+  }
+
+  chain(n: StNode, loop: Loop | null): void {
+    const count = n.units.u === 'n' ? n.units.n : 1;
+    const role = n.role ?? (n.roleAlt ? n.roleAlt.options[this.choice(n.roleAlt.id)] : 'chains');
+    const ch = 'ch';
+    switch (role) {
+      case 'turning':
+        this.step(`ch ${count}`, `ch ${count} (${count === 1 ? 'turning chain' : 'starting chain'}, not a stitch)`, 0, 0, null, n.col);
+        return;
+      case 'counts': {
+        const as = n.countsAs ?? STITCH_BY_ID.get('dc')!;
+        const works = this.base === 'ring' || this.pool === 0 ? 0 : 1;
+        this.step(`ch ${count}`, `ch ${count} (counts as the first ${this.abbr(as)})`, works, 1, loop, n.col);
+        this.addMade(as.madeAs, 1);
+        return;
+      }
+      case 'foundation':
+        this.foundationLen = (this.foundationLen ?? 0) + count;
+        for (let k = 1; k <= count; k++) this.step(ch, `ch (${k} of ${count}, foundation chain)`, 0, 0, null, n.col);
+        return;
+      case 'ring':
+        for (let k = 1; k <= count; k++) this.step(ch, `ch (${k} of ${count}, for the ring)`, 0, 0, null, n.col);
+        return;
+      default:
+        for (let k = 1; k <= count; k++) this.step(ch, count > 1 ? `ch (${k} of ${count})` : 'ch 1', 0, 1, null, n.col);
+        this.addMade('ch', count);
+    }
+  }
+
+  group(g: GroupNode, outerLoop: Loop | null): void {
+    const loop = g.loop ?? outerLoop;
+    if (g.into) {
+      const inner = collect(g.body);
+      const wpuFirst = g.into.t === 'ring' ? 0 : this.worksPer(g.into, STITCH_BY_ID.get('sc')!, g.col);
+      if (g.into.t === 'ring' && this.base !== 'ring') this.enterRing('mr');
+      const count = this.unitCount(g.units, wpuFirst || 1, g.display, g.col);
+      const where =
+        g.into.t === 'same' ? 'in the same stitch' : g.into.t === 'ring' ? 'in the ring' : g.into.t === 'space' ? 'in the next space' : `in the next ${this.noun()}`;
+      for (let k = 1; k <= count; k++) {
+        const wpu = k === 1 ? wpuFirst : this.worksPer(g.into.t === 'fromHook' ? { t: 'next' } : g.into, STITCH_BY_ID.get('sc')!, g.col);
+        this.step(g.display, `${g.display} ${where}`, wpu, inner.makes, loop ?? this.loopMode, g.col);
+        for (const [key, v] of Object.entries(inner.made)) this.addMade(key, v);
+      }
+      return;
+    }
+    const outer = this.repeat;
+    const infos: Array<{ index: number; of: number }> = [];
+    const once = (index: number, of: number) => {
+      const info = { index, of };
+      infos.push(info);
+      this.repeat = g.times.k === 'n' && g.times.n === 1 && !g.star ? outer : info;
+      this.run(g.body, loop);
+    };
+    try {
+      if (g.times.k === 'n' || g.times.k === 'alt') {
+        const times = g.times.k === 'n' ? g.times.n : g.times.options[this.choice(g.times.id)] ?? g.times.options[0];
+        for (let i = 1; i <= times; i++) once(i, times);
+        return;
+      }
+      // Fill: as many times as the stitches left allow, keeping `leave` for the instructions after.
+      const leave = g.times.leave;
+      const start = this.pos;
+      const rem0 = this.remaining() - leave;
+      once(1, 1);
+      const w = this.pos - start;
+      if (w <= 0) {
+        this.problems.push(error('This repeat works no stitches, so it cannot fill the round', g.col));
+        this.clean = false;
+        return;
+      }
+      const after = rem0 - w;
+      if (after < 0) return;
+      const extra = Math.floor(after / w);
+      const left = after % w;
+      if (left) {
+        this.problems.push(
+          error(
+            `The repeat works ${plural(w, 'stitch', 'stitches')} each time, but ${rem0} are left for it: it cannot fit the round (${extra + 1} repeats leave ${left} over)`,
+            g.col,
+          ),
+        );
+        this.fitFailed = true;
+        this.clean = false;
+      }
+      for (let i = 2; i <= extra + 1; i++) once(i, extra + 1);
+      for (const info of infos) info.of = extra + 1;
+    } finally {
+      this.repeat = outer;
+    }
+  }
+}
+
+/** Stitches made by a group worked into one stitch, "(sc, ch 2, sc)". */
+function collect(nodes: Node[]): { makes: number; made: Record<string, number> } {
+  const made: Record<string, number> = {};
+  let makes = 0;
+  const add = (k: string, n: number) => {
+    made[k] = (made[k] ?? 0) + n;
+    makes += n;
+  };
+  const visit = (ns: Node[], mul: number) => {
+    for (const n of ns) {
+      if (n.t === 'st') {
+        const units = n.units.u === 'n' ? n.units.n : 1;
+        if (n.entry.id === 'ch') {
+          if (n.role === 'turning') continue;
+          add('ch', units * mul);
+        } else if (n.entry.kind === 'inc') add(n.incOf ? n.incOf.madeAs : 'sc', 2 * units * mul);
+        else add(n.entry.madeAs, n.per * n.entry.makes * units * mul);
+      } else if (n.t === 'group') {
+        const t = n.times.k === 'n' ? n.times.n : n.times.k === 'alt' ? n.times.options[0] : 1;
+        visit(n.body, mul * t * (n.into && n.units.u === 'n' ? n.units.n : 1));
+      }
+    }
+  };
+  visit(nodes, 1);
+  return { makes, made };
+}
+
+function runOnce(nodes: Node[], env: EvalEnv, choices: number[], initialLoop: Loop | null): Walker | null {
+  const w = new Walker(env, choices);
+  w.loopMode = initialLoop;
+  try {
+    w.run(nodes, null);
+  } catch (e) {
+    if (!(e instanceof Budget)) throw e;
+    return null;
+  }
+  return w;
+}
+
+/**
+ * Evaluates a parsed round. Ambiguous readings (a leading "ch 3" with no "(counts as …)", "rep from * 5
+ * times") are tried in order; the first that leaves no count problem (and matches a stated count) wins,
+ * else the first, which is the common-practice reading.
+ */
+export function evaluate(parsed: Parsed, env: EvalEnv, opts: { nodes?: Node[]; initialLoop?: Loop | null; stated?: number | null } = {}): EvalResult {
+  const nodes = opts.nodes ?? parsed.nodes;
+  const alts = parsed.alts.length;
+  const stated = opts.stated === undefined ? parsed.stated : opts.stated;
+  const combos: number[][] = [];
+  if (!alts) combos.push([]);
+  else {
+    // Up to 4 ambiguities vary (16 readings); the rest keep their first reading.
+    const vary = Math.min(alts, 4);
+    const all: number[][] = [];
+    for (let mask = 0; mask < 1 << vary; mask++) {
+      const c = new Array<number>(alts).fill(0);
+      for (let b = 0; b < vary; b++) if (mask & (1 << b)) c[b] = 1;
+      all.push(c);
+    }
+    all.sort((a, b) => a.reduce((s, x) => s + x, 0) - b.reduce((s, x) => s + x, 0));
+    combos.push(...all);
+  }
+  let first: EvalResult | null = null;
+  for (const combo of combos) {
+    const w = runOnce(nodes, env, combo, opts.initialLoop ?? null);
+    if (!w) {
+      const over: EvalResult = {
+        steps: [],
+        made: {},
+        loops: [],
+        worked: 0,
+        stitches: 0,
+        problems: [
+          error(
+            (env.maxSteps ?? MAX_STEPS) < MAX_STEPS
+              ? `${env.name} is past what Whorlbook counts in one piece; split the pattern into pieces`
+              : `${env.name} is too long to count (more than ${MAX_STEPS} steps); check the repeat counts`,
+            parsed.startCol,
+          ),
+        ],
+        clean: false,
+      };
+      return over;
+    }
+    const res = finish(w, env, parsed);
+    if (!first) first = res;
+    if (combos.length === 1) return res;
+    const countOk = res.clean && !res.problems.some((p) => p.severity === 'error');
+    if (countOk && (stated === null || stated === res.stitches)) return res;
+  }
+  return first!;
+}
+
+function finish(w: Walker, env: EvalEnv, parsed: Parsed): EvalResult {
+  const worked = w.offset + w.pos;
+  const stitches = w.steps.reduce((s, st) => s + st.makes, 0);
+  const problems = w.problems;
+  const name = env.name;
+  const endCol = parsed.endCol;
+  if (w.base === 'ring') {
+    // Worked into a ring: nothing of a previous round to cover.
+  } else if (w.side === 2) {
+    if (w.pos > w.pool) {
+      problems.push(error(`${name} works ${w.pos} on the other side of the chain, but it has only ${w.pool}`, w.overCol ?? endCol));
+      w.clean = false;
+    }
+  } else if (w.pool === 0 && w.base === 'prev' && worked > 0) {
+    problems.push(
+      error(`${name} works into ${plural(worked, 'stitch', 'stitches')}, but there are none before it — start with a magic ring or a chain, or give the starting count`, parsed.startCol),
+    );
+    w.clean = false;
+  } else if (worked > w.pool) {
+    const from =
+      w.base === 'chain'
+        ? `the chain has only ${w.pool} to work into`
+        : w.base === 'leftover'
+          ? `only ${w.pool} loops are left to work into`
+          : `${env.prevName ?? 'the round before'} has only ${w.pool}`;
+    problems.push(error(`${name} works ${worked} stitches, but ${from}`, w.overCol ?? endCol));
+    w.clean = false;
+  } else if (worked < w.pool) {
+    const left = w.pool - worked;
+    const what = w.base === 'chain' ? 'chains' : 'stitches';
+    if (w.leave) {
+      if (w.leave.n !== null && w.leave.n !== left) {
+        problems.push(error(`${name} says to leave ${w.leave.n} unworked, but ${left} ${left === 1 ? 'is' : 'are'} left`, w.leave.col));
+        w.clean = false;
+      }
+    } else if (!w.fitFailed) {
+      const sts = w.base === 'chain' ? (left === 1 ? 'ch' : 'ch') : left === 1 ? 'st' : 'sts';
+      problems.push(
+        error(
+          `${name} works ${worked} of ${w.pool} ${what}; ${left} ${left === 1 ? 'is' : 'are'} left unworked — say 'leave the remaining ${left} ${sts} unworked' if that is meant`,
+          endCol,
+        ),
+      );
+      w.clean = false;
+    }
+  } else if (w.leave && w.leave.n !== null && w.leave.n > 0) {
+    problems.push(error(`${name} says to leave ${w.leave.n} unworked, but none are left`, w.leave.col));
+    w.clean = false;
+  }
+  return { steps: w.steps, made: w.made, loops: [...w.loops], worked, stitches, problems, clean: w.clean };
+}
