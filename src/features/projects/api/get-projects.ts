@@ -11,6 +11,12 @@ export interface ProjectListItem {
   finishedOn: string | null;
   updatedAt: string;
   pieceCount: number;
+  recipient: string | null;
+  patternTitle: string | null;
+  forYoungChild: boolean;
+  visibility: 'private' | 'link' | 'public';
+  /** How many safety cautions the project page shows. */
+  cautionCount: number;
 }
 
 export const projectsQueryOptions = (filters: { status?: ProjectStatus } = {}) =>

@@ -1,0 +1,226 @@
+import { useState } from 'react';
+import { Link, useNavigate, useParams } from 'react-router-dom';
+import { useQueryClient } from '@tanstack/react-query';
+import { ArrowLeft, BookOpen, Calendar, Gift, Pencil, Trash2 } from 'lucide-react';
+import { toast } from 'sonner';
+import { Banner } from '@/components/ui/banner';
+import { Button, ButtonLink } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { SelectField } from '@/components/ui/field';
+import { Loading } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { projectStatusLabels, type ProjectStatus } from '@/schemas/common';
+import { useProject } from '@/features/projects/api/get-project';
+import { projectKeys } from '@/features/projects/api/keys';
+import { useUpdateProject } from '@/features/projects/api/update-project';
+import { useDeleteProject } from '@/features/projects/api/delete-project';
+import { Cautions } from '@/features/projects/components/cautions';
+import { MaterialsSection } from '@/features/projects/components/materials-section';
+import { PieceCard } from '@/features/projects/components/piece-card';
+import { ProjectDetailsForm } from '@/features/projects/components/project-details-form';
+import { projectStatuses, StatusBadge } from '@/features/projects/components/status';
+import { useYarns } from '@/features/yarns/api/get-yarns';
+import { JournalTimeline } from '@/features/journal/components/journal-timeline';
+import { SharePanel } from '@/features/showcase/components/share-panel';
+import { yarnKeys } from '@/features/yarns/api/keys';
+import type { Project } from '@/types/api';
+
+function formatDay(iso: string) {
+  const d = new Date(`${iso}T12:00:00`);
+  return Number.isNaN(d.getTime()) ? iso : d.toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+}
+
+/** The yarn weight the silhouette sizes a piece by: the piece's own yarn if the materials name it, else the first. */
+function weightFor(project: Project, yarnNames: string[]) {
+  const yarns = project.materials.yarns;
+  return (yarns.find((y) => yarnNames.includes(y.name) && y.weight != null) ?? yarns.find((y) => y.weight != null))?.weight ?? null;
+}
+
+export default function ProjectRoute() {
+  const { projectId } = useParams();
+  const id = Number(projectId);
+  const project = useProject(id);
+  const shelf = useYarns();
+  const update = useUpdateProject(id);
+  const remove = useDeleteProject(id);
+  const qc = useQueryClient();
+  const navigate = useNavigate();
+  const [editing, setEditing] = useState(false);
+  const [confirming, setConfirming] = useState(false);
+
+  if (project.isPending) return <Loading label="Opening the project…" />;
+  if (project.isError) {
+    const missing = project.error instanceof ApiError && (project.error.status === 404 || project.error.status === 422);
+    return (
+      <div className="flex flex-col gap-4">
+        <Banner tone="warning" title={missing ? 'That project could not be found' : 'The project did not load'}>
+          {missing ? 'It may have been deleted, or the link is wrong.' : project.error.message}
+        </Banner>
+        <ButtonLink to={paths.projects} variant="secondary">
+          Back to your projects
+        </ButtonLink>
+      </div>
+    );
+  }
+  const p = project.data;
+  // The piece being worked: the first one not yet done.
+  const current = p.pieces.find((pc) => pc.totals.rounds > 0 && pc.totals.copiesDone < pc.copies);
+
+  const setStatus = (status: ProjectStatus) => update.mutate({ status }, { onSuccess: () => toast.success(`Marked as ${projectStatusLabels[status].toLowerCase()}.`) });
+
+  return (
+    <article className="flex flex-col gap-6">
+      <div>
+        <Link to={paths.projects} className="-ml-2 inline-flex min-h-tap items-center gap-1 rounded-soft px-2 font-semibold text-moss dark:text-[#9cc3a8]">
+          <ArrowLeft aria-hidden className="h-5 w-5" /> Projects
+        </Link>
+        <header className="mt-1 flex flex-col gap-2">
+          <h1 className="text-2xl font-bold leading-tight sm:text-3xl">{p.title}</h1>
+          <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-ink/80 dark:text-oat/80">
+            <StatusBadge status={p.status} />
+            {p.recipient ? (
+              <span className="inline-flex items-center gap-1">
+                <Gift aria-hidden className="h-4 w-4" /> for {p.recipient}
+              </span>
+            ) : null}
+            {p.startedOn ? (
+              <span className="inline-flex items-center gap-1 tabular">
+                <Calendar aria-hidden className="h-4 w-4" /> started {formatDay(p.startedOn)}
+                {p.finishedOn ? `, finished ${formatDay(p.finishedOn)}` : ''}
+              </span>
+            ) : p.finishedOn ? (
+              <span className="tabular">finished {formatDay(p.finishedOn)}</span>
+            ) : null}
+          </div>
+          {p.patternCredit ? (
+            <p className="flex items-start gap-1.5 text-sm">
+              <BookOpen aria-hidden className="mt-0.5 h-4 w-4 shrink-0 text-moss" />
+              <span>
+                From{' '}
+                {p.patternId ? (
+                  <Link to={paths.pattern(p.patternId)} className="font-semibold underline">
+                    {p.patternCredit.title}
+                  </Link>
+                ) : (
+                  <span className="font-semibold">{p.patternCredit.title}</span>
+                )}
+                {p.patternCredit.designerCredit ? ` by ${p.patternCredit.designerCredit}` : ''}
+              </span>
+            </p>
+          ) : null}
+        </header>
+      </div>
+
+      <Cautions cautions={p.cautions} />
+
+      <SelectField label="Status" value={p.status} disabled={update.isPending} onChange={(e) => setStatus(e.target.value as ProjectStatus)} className="max-w-xs">
+        {projectStatuses.map((s) => (
+          <option key={s} value={s}>
+            {projectStatusLabels[s]}
+          </option>
+        ))}
+      </SelectField>
+
+      <section aria-labelledby="pieces-heading" className="flex flex-col gap-3">
+        <h2 id="pieces-heading" className="text-xl font-bold">
+          Pieces
+        </h2>
+        {p.pieces.length ? (
+          <ul className="grid gap-4 md:grid-cols-2">
+            {p.pieces.map((piece) => (
+              <li key={piece.id}>
+                <PieceCard projectId={p.id} piece={piece} terms={p.terms} yarnWeight={weightFor(p, piece.yarns)} showShape={piece.id === current?.id} />
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <p className="text-ink/70 dark:text-oat/70">This project has no pieces yet.</p>
+        )}
+      </section>
+
+      <Card className="p-4 sm:p-5">
+        <MaterialsSection
+          materials={p.materials}
+          shelf={shelf.data ?? []}
+          saving={update.isPending}
+          onSave={(materials, done) =>
+            update.mutate(
+              { materials },
+              {
+                onSuccess: () => {
+                  done();
+                  // What is left on the shelf depends on what projects used.
+                  void qc.invalidateQueries({ queryKey: yarnKeys.all });
+                },
+              },
+            )
+          }
+        />
+      </Card>
+
+      <Card className="p-4 sm:p-5">
+        <div className="flex items-center justify-between gap-3">
+          <h2 className="text-xl font-bold">{editing ? 'Edit the project' : 'Notes'}</h2>
+          {!editing ? (
+            <Button variant="quiet" onClick={() => setEditing(true)}>
+              <Pencil aria-hidden className="h-4 w-4" /> Edit details
+            </Button>
+          ) : null}
+        </div>
+        {editing ? (
+          <div className="mt-3">
+            <ProjectDetailsForm
+              project={p}
+              pending={update.isPending}
+              onCancel={() => setEditing(false)}
+              onSave={(v) => update.mutate({ ...v, recipient: v.recipient || null, notes: v.notes || null }, { onSuccess: () => setEditing(false) })}
+            />
+          </div>
+        ) : p.notes ? (
+          <p className="mt-2 whitespace-pre-wrap leading-relaxed">{p.notes}</p>
+        ) : (
+          <p className="mt-2 text-ink/70 dark:text-oat/70">No notes yet.</p>
+        )}
+      </Card>
+
+      {/* journal timeline (issue 7) */}
+      <JournalTimeline
+        projectId={p.id}
+        pieces={p.pieces.map((piece) => ({ id: piece.id, name: piece.name }))}
+        onCoverChange={() => void qc.invalidateQueries({ queryKey: projectKeys.detail(id) })}
+      />
+
+      {/* sharing (issue 8) */}
+      <SharePanel projectId={p.id} title={p.title} onChanged={() => qc.invalidateQueries({ queryKey: projectKeys.detail(id) })} />
+
+      <section aria-label="Delete" className="border-t border-wool pt-6 dark:border-[#4a423c]">
+        <Button variant="quiet" className="text-clay! dark:text-[#e59b7c]!" onClick={() => setConfirming(true)}>
+          <Trash2 aria-hidden className="h-5 w-5" /> Delete this project
+        </Button>
+      </section>
+      <ConfirmDialog
+        open={confirming}
+        title="Delete this project?"
+        confirmLabel="Delete the project"
+        pending={remove.isPending}
+        onCancel={() => setConfirming(false)}
+        onConfirm={() =>
+          remove.mutate(undefined, {
+            onSuccess: () => {
+              setConfirming(false);
+              toast.success(`Deleted “${p.title}”.`);
+              navigate(paths.projects, { replace: true });
+              qc.removeQueries({ queryKey: projectKeys.detail(id) });
+            },
+          })
+        }
+      >
+        <p>
+          “{p.title}” goes for good, with its pieces, counts, placements, journal and photos. The pattern it came from stays.
+        </p>
+      </ConfirmDialog>
+    </article>
+  );
+}
