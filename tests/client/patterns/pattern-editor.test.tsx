@@ -132,6 +132,20 @@ describe('the round planner', () => {
     expect(within(planner).getByRole('button', { name: 'Insert as Rnd 3' })).toBeInTheDocument();
   });
 
+  it('writes the round in UK terms for a pattern written in UK terms', async () => {
+    const user = await openNew();
+    await user.selectOptions(screen.getByLabelText('Written in'), 'uk');
+    await user.type(instructions(), 'Rnd 1: 6 dc in MR (6){Enter}Rnd 2: inc x6 (12)');
+    await user.click(screen.getByRole('button', { name: 'Round planner' }));
+    const planner = screen.getByRole('group', { name: 'Round planner' });
+    await waitFor(() => expect(within(planner).getByLabelText('Stitches before')).toHaveValue(12));
+    await user.type(within(planner).getByLabelText('Stitches wanted'), '18');
+    await user.click(within(planner).getByLabelText('Stagger the increases or decreases'));
+    // Source: US sc is UK dc (standards.md §4, US/UK terms).
+    expect(within(planner).getByRole('status', { name: 'Planned round' })).toHaveTextContent('Rnd 3: (dc, inc) x6 (18)');
+    expect(within(planner).getByText(/Makes/)).toHaveTextContent('Makes 18 stitches from 12');
+  });
+
   it('explains a count one round cannot reach instead of writing it', async () => {
     const user = await openNew();
     await user.type(instructions(), 'Rnd 1: 6 sc in MR (6)');
@@ -236,7 +250,7 @@ describe('saving', () => {
     await user.type(screen.getByLabelText('Hook (mm)'), '3.5');
     await user.type(instructions(), 'Rnd 1: 6 sc in MR (6)');
     await user.click(screen.getByRole('button', { name: 'Save pattern' }));
-    expect(await screen.findByRole('heading', { name: 'Sprout' })).toBeInTheDocument();
+    expect(await screen.findByRole('heading', { name: 'Sprout' }, { timeout: 5000 })).toBeInTheDocument();
     expect(body).toMatchObject({ title: 'Sprout', terms: 'us', visibility: 'private', pieces: [{ name: 'Head', copies: 2, hookMm: 3.5, instructions: 'Rnd 1: 6 sc in MR (6)' }] });
     expect(screen.getByRole('link', { name: 'Start a project from this pattern' })).toHaveAttribute('href', '/projects/new?patternId=52');
   });
@@ -256,7 +270,7 @@ describe('saving', () => {
     );
     const { router } = renderRoute('/patterns/41');
     const user = userEvent.setup();
-    const title = await screen.findByLabelText('Title');
+    const title = await screen.findByLabelText('Title', {}, { timeout: 5000 });
     await user.clear(title);
     await user.type(title, 'Moss pebble, larger');
     expect(screen.getByText('Unsaved changes')).toBeInTheDocument();
@@ -279,7 +293,7 @@ describe('saving', () => {
     server.use(http.get('*/api/patterns', () => HttpResponse.json({ patterns: [] })), http.get('*/api/projects', () => HttpResponse.json({ projects: [] })));
     const { router } = renderRoute('/patterns/new');
     const user = userEvent.setup();
-    await user.type(await screen.findByLabelText('Title'), 'Half-typed');
+    await user.type(await screen.findByLabelText('Title', {}, { timeout: 5000 }), 'Half-typed');
     await user.click(screen.getAllByRole('link', { name: /Patterns/ })[0]);
     await waitFor(() => expect(dialogWith(/Leave without saving\?/)).toHaveAttribute('open'));
     const dialog = dialogWith(/Leave without saving\?/);
@@ -294,7 +308,7 @@ describe('someone else’s public pattern', () => {
   it('is shown read-only, with its round table, and can start a project', async () => {
     server.use(http.get('*/api/patterns/41', () => HttpResponse.json({ pattern: makePattern({ mine: false, visibility: 'public' }) })));
     renderRoute('/patterns/41');
-    expect(await screen.findByText('Read-only')).toBeInTheDocument();
+    expect(await screen.findByText('Read-only', {}, { timeout: 5000 })).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Save/ })).not.toBeInTheDocument();
     expect(screen.queryByLabelText('Title')).not.toBeInTheDocument();
     expect(within(screen.getByRole('region', { name: 'Round table' })).getByText('Rnd 2')).toBeInTheDocument();
@@ -304,7 +318,7 @@ describe('someone else’s public pattern', () => {
   it('answers a missing pattern with a page, not a crash', async () => {
     server.use(http.get('*/api/patterns/404', () => HttpResponse.json({ error: 'That pattern could not be found.' }, { status: 404 })));
     renderRoute('/patterns/404');
-    expect(await screen.findByText('That pattern could not be found')).toBeInTheDocument();
+    expect(await screen.findByText('That pattern could not be found', {}, { timeout: 5000 })).toBeInTheDocument();
   });
 });
 
@@ -321,7 +335,7 @@ describe('the pattern list', () => {
       ),
     );
     renderRoute('/patterns');
-    const sprout = (await screen.findByText('Sprout')).closest('a')!;
+    const sprout = (await screen.findByText('Sprout', {}, { timeout: 5000 })).closest('a')!;
     expect(sprout).toHaveAttribute('href', '/patterns/1');
     expect(sprout).toHaveTextContent('3 pieces');
     expect(sprout).toHaveTextContent('2 to check');

@@ -1,7 +1,7 @@
 import { useId, useMemo, useState } from 'react';
 import { AlertTriangle, CheckCircle2, CornerDownLeft } from 'lucide-react';
 import { checkPiece, planRound } from '@/engine';
-import type { PlanOptions, Terms } from '@/engine/types';
+import type { Terms } from '@/engine/types';
 import { Button } from '@/components/ui/button';
 import { CheckboxField } from '@/components/ui/field';
 
@@ -19,9 +19,8 @@ function preview(from: number, to: number, staggered: boolean, label: string, te
   if (to * 2 < from) return { error: `From ${from} stitches a round of decreases leaves at least ${Math.ceil(from / 2)}.` };
   let instruction: string;
   try {
-    // The planner writes in the pattern's own terms (its UK wording goes through the engine's term converter).
-    const opts: PlanOptions & { terms?: Terms } = { staggered, terms };
-    instruction = planRound(from, to, opts).instruction;
+    // Written in the pattern's own terms, so the inserted line reads like the rest.
+    instruction = planRound(from, to, { staggered, terms }).instruction;
   } catch (e) {
     return { error: e instanceof Error ? e.message : 'That round cannot be planned.' };
   }
