@@ -35,6 +35,10 @@ const memberScreens: RouteObject[] = [
   { path: '/patterns/new', ...screen(() => import('./routes/pattern-new')) },
   { path: '/patterns/:patternId', ...screen(() => import('./routes/pattern-edit')) },
   // projects (issue 5): /projects, /projects/new, /projects/:projectId, /yarns
+  { path: '/projects', ...screen(() => import('./routes/projects')) },
+  { path: '/projects/new', ...screen(() => import('./routes/project-new')) },
+  { path: '/projects/:projectId', ...screen(() => import('./routes/project')) },
+  { path: '/yarns', ...screen(() => import('./routes/yarn-shelf')) },
 ];
 
 const adminScreens: RouteObject[] = [
