@@ -174,7 +174,7 @@ class PieceReader {
         if (stated !== null && stated !== stitches) {
           // One slip, one sentence: a round that leaves stitches unworked (or works too many) usually
           // misses its stated count for the same reason, so the count goes into that sentence.
-          const cover = problems.findIndex((p) => / works \d+ (of \d+ |stitches, but )/.test(p.message));
+          const cover = problems.findIndex((p) => / works \d+ (of \d+ |stitches, but )|cannot fit the round|stitch(es)? over$/.test(p.message));
           if (cover >= 0) {
             problems[cover] = { ...problems[cover], message: `${problems[cover].message} (it makes ${stitches}, not the ${stated} stated)` };
           } else {

@@ -140,7 +140,8 @@ class Walker {
   worksPer(into: Into, entry: StitchEntry, at: number): number {
     switch (into.t) {
       case 'next':
-        return entry.works;
+        // After "MR," or "ch 4, join to form a ring," stitches with no target go into the ring.
+        return this.base === 'ring' ? 0 : entry.works;
       case 'same':
         return this.anyWorked || this.base === 'ring' ? 0 : Math.min(1, entry.works);
       case 'ring':
@@ -320,6 +321,7 @@ class Walker {
         case 'space':
           return n.into.size > 1 ? `in the next ch-${n.into.size} space` : 'in the next space';
         default:
+          if (this.base === 'ring') return this.ringKind === 'mr' ? 'in the magic ring' : 'in the ring';
           return `in the next ${noun}`;
       }
     };

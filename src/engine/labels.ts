@@ -35,13 +35,14 @@ export function readLabel(line: string): Label | null {
   const m = (PLURAL.test(line) ? LABEL_MANY : LABEL_ONE).exec(line);
   if (!m) return null;
   const word = m[2].toLowerCase();
+  const spaced = /\s$/.test(m[0]);
   let end = m[0].length;
   const rest = line.slice(end);
   // What separates the label from the instructions. A bare "R" needs punctuation ("R5:"), the words
   // may be followed by a space only ("Rnd 5 sc around").
   const sep = /^\s*(?:[:.)\-–—,]|$)/.exec(rest);
   if (sep) end += sep[0].length;
-  else if (word === 'r' || !/^\s/.test(rest)) return null;
+  else if (word === 'r' || !(spaced || /^\s/.test(rest))) return null;
   const label = line.slice(m[1].length, m[0].length).replace(/\s*(\([^)]*\)|\[[^\]]*\])\s*$/, '').trim();
   const problems: Problem[] = [];
   const numbers: number[] = [];

@@ -372,6 +372,8 @@ interface Target {
   tog: boolean;
   otherSide: boolean;
   loop: Loop | null;
+  /** Only a loop or "the other side" was named ("sc around in BLO"): no target. */
+  bare: boolean;
 }
 
 class Cursor {
@@ -401,7 +403,7 @@ function readNoun(c: Cursor, r: Reader): Tok | null {
 
 function readTarget(c: Cursor, r: Reader): Target | null {
   const start = c.i;
-  const tg: Target = { into: { t: 'next' }, units: { u: 'n', n: 1 }, explicitCount: false, each: false, tog: false, otherSide: false, loop: null };
+  const tg: Target = { into: { t: 'next' }, units: { u: 'n', n: 1 }, explicitCount: false, each: false, tog: false, otherSide: false, loop: null, bare: false };
   while (isWord(c.el, 'blo', 'flo', 'only', 'both', 'loops', 'loop')) {
     const v = (c.el as Tok).v;
     if (v === 'blo' || v === 'flo') tg.loop = v;
@@ -503,7 +505,7 @@ function readTarget(c: Cursor, r: Reader): Target | null {
   } else if (tg.loop === null && !tg.otherSide) {
     c.i = start;
     return null;
-  }
+  } else tg.bare = true;
   // "in next 3 sts around" is just "next 3"; "in each st around" was read above.
   return tg;
 }
@@ -615,9 +617,9 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
         c.i--;
         break;
       }
-      target = tg;
       if (tg.loop) loop = tg.loop;
       if (tg.otherSide) otherSide = true;
+      if (!tg.bare) target = tg;
       continue;
     }
     if (isWord(e, 'next', 'each', 'remaining') && !target) {
@@ -782,9 +784,11 @@ function readGroup(c: Cursor, r: Reader, out: Item[], clauseLoop: Loop | null): 
         c.i--;
         break;
       }
-      g.into = tg.into;
-      g.units = tg.units;
       if (tg.loop) g.loop = tg.loop;
+      if (!tg.bare) {
+        g.into = tg.into;
+        g.units = tg.units;
+      }
       continue;
     }
     if (isWord(e, 'each') && !g.into) {
@@ -969,6 +973,11 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
   while (!c.done()) {
     const e = c.el!;
     if (isWord(e, 'work', 'working', 'with', 'then', 'only', 'st', 'pm', 'bor', 'again', 'continue')) {
+      c.i++;
+      continue;
+    }
+    if (isWord(e, 'in', 'on') && isWord(c.at(1), 'blo', 'flo')) {
+      // "in back loops only sc around": the loop comes first.
       c.i++;
       continue;
     }
