@@ -20,6 +20,17 @@ export async function getMe(): Promise<Me | null> {
   }
 }
 
-export const meQueryOptions = () => queryOptions({ queryKey: authKeys.me(), queryFn: getMe, staleTime: 5 * 60_000 });
+// The member may be restored from the device's persisted cache (offline use). Anything older than this page load
+// is asked of the server again, so a session that ended elsewhere (signed out on another device, password reset,
+// disabled by an admin) sends this browser to sign-in instead of showing a signed-in shell; offline, it stays.
+const pageLoadedAt = Date.now();
+
+export const meQueryOptions = () =>
+  queryOptions({
+    queryKey: authKeys.me(),
+    queryFn: getMe,
+    staleTime: 5 * 60_000,
+    refetchOnMount: (query) => (query.state.dataUpdatedAt < pageLoadedAt ? 'always' : true),
+  });
 
 export const useMe = () => useQuery(meQueryOptions());
