@@ -1,10 +1,21 @@
 import { Router } from 'express';
 import type { AppContext } from '../context.js';
 import { IdParamsSchema } from '../../src/schemas/common.js';
-import { CreatePatternSchema, UpdatePatternSchema, type CreatePatternInput, type UpdatePatternInput } from '../../src/schemas/pattern.js';
+import {
+  CreatePatternSchema,
+  UpdatePatternSchema,
+  type CreatePatternInput,
+  type UpdatePatternInput,
+} from '../../src/schemas/pattern.js';
 import { currentUser, requireUser } from '../middleware/require-user.js';
 import { validate } from '../middleware/validate.js';
-import { createPattern, deletePattern, getPattern, listPatterns, updatePattern } from '../services/patterns.js';
+import {
+  createPattern,
+  deletePattern,
+  getPattern,
+  listPatterns,
+  updatePattern,
+} from '../services/patterns.js';
 
 const idOf = (params: unknown) => (params as { id: number }).id;
 
@@ -25,9 +36,21 @@ export function patternsRouter(ctx: AppContext) {
     res.json({ pattern: await getPattern(ctx.db, currentUser(res).id, idOf(req.params)) });
   });
 
-  router.patch('/patterns/:id', requireUser, validate({ params: IdParamsSchema, body: UpdatePatternSchema }), async (req, res) => {
-    res.json({ pattern: await updatePattern(ctx.db, currentUser(res).id, idOf(req.params), req.body as UpdatePatternInput) });
-  });
+  router.patch(
+    '/patterns/:id',
+    requireUser,
+    validate({ params: IdParamsSchema, body: UpdatePatternSchema }),
+    async (req, res) => {
+      res.json({
+        pattern: await updatePattern(
+          ctx.db,
+          currentUser(res).id,
+          idOf(req.params),
+          req.body as UpdatePatternInput,
+        ),
+      });
+    },
+  );
 
   router.delete('/patterns/:id', requireUser, validate({ params: IdParamsSchema }), async (req, res) => {
     await deletePattern(ctx.db, currentUser(res).id, idOf(req.params));

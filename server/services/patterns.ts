@@ -113,7 +113,9 @@ function pieceColumns(p: PatternPieceInput, position: number) {
 }
 
 async function loadPieces(db: Knex, patternId: number): Promise<PieceRow[]> {
-  return db('pattern_pieces').where({ pattern_id: patternId }).orderBy([{ column: 'position' }, { column: 'id' }]);
+  return db('pattern_pieces')
+    .where({ pattern_id: patternId })
+    .orderBy([{ column: 'position' }, { column: 'id' }]);
 }
 
 /** A pattern the member may read: their own, or anyone's public one. Everything else is a 404. */
@@ -129,7 +131,11 @@ async function readablePattern(db: Knex, userId: string, patternId: number): Pro
 /** The member's own pattern, for changes. A public pattern of someone else's is readable but not theirs to change. */
 async function writablePattern(db: Knex, userId: string, patternId: number): Promise<PatternRow> {
   const row = await readablePattern(db, userId, patternId);
-  if (row.owner_id !== userId) throw new HttpError(403, 'Only the member who wrote this pattern can change it. Start a project from it to keep your own copy.');
+  if (row.owner_id !== userId)
+    throw new HttpError(
+      403,
+      'Only the member who wrote this pattern can change it. Start a project from it to keep your own copy.',
+    );
   return row;
 }
 
@@ -153,13 +159,20 @@ export async function createPattern(db: Knex, userId: string, input: CreatePatte
         visibility: input.visibility ?? 'private',
       })
       .returning('id');
-    await trx('pattern_pieces').insert(input.pieces.map((p, i) => ({ pattern_id: patternId, ...pieceColumns(p, i) })));
+    await trx('pattern_pieces').insert(
+      input.pieces.map((p, i) => ({ pattern_id: patternId, ...pieceColumns(p, i) })),
+    );
     return patternId as number;
   });
   return getPattern(db, userId, id);
 }
 
-export async function updatePattern(db: Knex, userId: string, patternId: number, input: UpdatePatternInput): Promise<Pattern> {
+export async function updatePattern(
+  db: Knex,
+  userId: string,
+  patternId: number,
+  input: UpdatePatternInput,
+): Promise<Pattern> {
   await db.transaction(async (trx) => {
     await writablePattern(trx, userId, patternId);
     const changes: Record<string, unknown> = {};
@@ -176,7 +189,11 @@ export async function updatePattern(db: Knex, userId: string, patternId: number,
 
     if (input.pieces !== undefined) {
       // Replace the list, keeping the ids of pieces the editor sent back (ids from another pattern are ignored).
-      const existing = new Set((await trx('pattern_pieces').where({ pattern_id: patternId }).select('id')).map((r: { id: number }) => r.id));
+      const existing = new Set(
+        (await trx('pattern_pieces').where({ pattern_id: patternId }).select('id')).map(
+          (r: { id: number }) => r.id,
+        ),
+      );
       const kept = new Set<number>();
       for (const [i, p] of input.pieces.entries()) {
         if (p.id !== undefined && existing.has(p.id) && !kept.has(p.id)) {
@@ -202,7 +219,12 @@ export async function deletePattern(db: Knex, userId: string, patternId: number)
 }
 
 export async function listPatterns(db: Knex, userId: string): Promise<PatternListItem[]> {
-  const rows: PatternRow[] = await db('patterns').where({ owner_id: userId }).orderBy([{ column: 'updated_at', order: 'desc' }, { column: 'id', order: 'desc' }]);
+  const rows: PatternRow[] = await db('patterns')
+    .where({ owner_id: userId })
+    .orderBy([
+      { column: 'updated_at', order: 'desc' },
+      { column: 'id', order: 'desc' },
+    ]);
   if (!rows.length) return [];
   const pieces: PieceRow[] = await db('pattern_pieces')
     .whereIn(

@@ -54,14 +54,20 @@ export const PatternPieceInputSchema = z.object({
     .max(80, { message: 'Keep the piece name to at most 80 characters.' }),
   instructions: z
     .string({ message: 'The instructions must be text.' })
-    .max(50_000, { message: 'These instructions are too long for one piece (at most 50,000 characters). Split them into pieces.' }),
+    .max(50_000, {
+      message:
+        'These instructions are too long for one piece (at most 50,000 characters). Split them into pieces.',
+    }),
   copies: z
     .number({ message: 'Say how many of this piece to make.' })
     .int({ message: 'Make a whole number of pieces.' })
     .min(1, { message: 'Make at least 1 of each piece.' })
     .max(100, { message: 'At most 100 copies of one piece.' }),
   hookMm: HookMmSchema.nullable().optional(),
-  yarns: z.array(z.string().trim().min(1).max(120)).max(20, { message: 'At most 20 yarns per piece.' }).optional(),
+  yarns: z
+    .array(z.string().trim().min(1).max(120))
+    .max(20, { message: 'At most 20 yarns per piece.' })
+    .optional(),
 });
 export type PatternPieceInput = z.infer<typeof PatternPieceInputSchema>;
 
@@ -92,7 +98,9 @@ export type CreatePatternFormValues = z.input<typeof CreatePatternSchema>;
 export const UpdatePatternSchema = z
   .object(fields)
   .partial()
-  .refine((v) => Object.values(v).some((x) => x !== undefined), { message: 'Send at least one field to change.' });
+  .refine((v) => Object.values(v).some((x) => x !== undefined), {
+    message: 'Send at least one field to change.',
+  });
 export type UpdatePatternInput = z.infer<typeof UpdatePatternSchema>;
 
 export const patternVisibilityLabels = {

@@ -1,9 +1,14 @@
 import { expect, test } from '@playwright/test';
 import { signIn } from './helpers';
 
-test('a maker types a pattern with a mistake, sees it at its line, fixes it, saves and starts a project', async ({ page }) => {
+test('a maker types a pattern with a mistake, sees it at its line, fixes it, saves and starts a project', async ({
+  page,
+}) => {
   const consoleErrors: string[] = [];
-  page.on('console', (m) => m.type() === 'error' && !/status of 401/.test(m.text()) && consoleErrors.push(m.text()));
+  page.on(
+    'console',
+    (m) => m.type() === 'error' && !/status of 401/.test(m.text()) && consoleErrors.push(m.text()),
+  );
   await signIn(page);
 
   await page.getByRole('navigation', { name: 'Main' }).last().getByRole('link', { name: 'Patterns' }).click();
@@ -35,7 +40,9 @@ test('a maker types a pattern with a mistake, sees it at its line, fixes it, sav
   // Clicking the problem puts the caret on line 3 of the instructions.
   await problem.click();
   await expect(instructions).toBeFocused();
-  const caretLine = await instructions.evaluate((el: HTMLTextAreaElement) => el.value.slice(0, el.selectionStart).split('\n').length);
+  const caretLine = await instructions.evaluate(
+    (el: HTMLTextAreaElement) => el.value.slice(0, el.selectionStart).split('\n').length,
+  );
   expect(caretLine).toBe(3);
 
   // Fix the stated count right there.
@@ -50,7 +57,9 @@ test('a maker types a pattern with a mistake, sees it at its line, fixes it, sav
   await expect(page).toHaveURL(/\/patterns\/\d+$/);
   await expect(page.getByRole('heading', { name: title })).toBeVisible();
   const patternId = new URL(page.url()).pathname.split('/').pop();
-  await expect(page.getByLabel(/^Instructions \(/)).toHaveValue('Rnd 1: 6 sc in MR (6)\nRnd 2: inc x6 (12)\nRnd 3: (sc, inc) x6 (18)');
+  await expect(page.getByLabel(/^Instructions \(/)).toHaveValue(
+    'Rnd 1: 6 sc in MR (6)\nRnd 2: inc x6 (12)\nRnd 3: (sc, inc) x6 (18)',
+  );
 
   // The server checked it again on save: no problems in the list.
   const list = await page.request.get('/api/patterns');
@@ -69,7 +78,9 @@ test('the US/UK toggle shows converted text and leaves the typed text alone', as
   await instructions.fill('Rnd 1: 6 sc in MR (6)\nRnd 2: (hdc, inc) x3 (9)');
   await page.getByRole('radio', { name: 'UK terms' }).click();
   // Source: US sc = UK dc, US hdc = UK htr (standards.md §4, US/UK terms).
-  await expect(page.getByLabel('Instructions in UK terms (read-only)')).toContainText('Rnd 2: (htr, inc) x3 (9)');
+  await expect(page.getByLabel('Instructions in UK terms (read-only)')).toContainText(
+    'Rnd 2: (htr, inc) x3 (9)',
+  );
   await expect(instructions).toBeHidden();
   await page.getByRole('radio', { name: /US terms/ }).click();
   await expect(instructions).toHaveValue('Rnd 1: 6 sc in MR (6)\nRnd 2: (hdc, inc) x3 (9)');

@@ -28,16 +28,24 @@ export default function PatternEditRoute() {
     if (deleted) navigate(paths.patterns, { replace: true });
   }, [deleted, navigate]);
 
-  if (!Number.isInteger(id) || id <= 0 || (pattern.error instanceof ApiError && (pattern.error.status === 404 || pattern.error.status === 422))) {
+  if (
+    !Number.isInteger(id) ||
+    id <= 0 ||
+    (pattern.error instanceof ApiError && (pattern.error.status === 404 || pattern.error.status === 422))
+  ) {
     return (
-      <EmptyState title="That pattern could not be found" action={<ButtonLink to={paths.patterns}>Back to your patterns</ButtonLink>}>
+      <EmptyState
+        title="That pattern could not be found"
+        action={<ButtonLink to={paths.patterns}>Back to your patterns</ButtonLink>}
+      >
         It may have been deleted, or it belongs to someone else.
       </EmptyState>
     );
   }
   if (deleted) return <Loading label="Deleting…" />;
   if (pattern.isPending) return <Loading label="Opening the pattern…" />;
-  if (pattern.isError) return <EmptyState title="The pattern could not be loaded">{pattern.error.message}</EmptyState>;
+  if (pattern.isError)
+    return <EmptyState title="The pattern could not be loaded">{pattern.error.message}</EmptyState>;
   const p = pattern.data;
 
   const start = (
@@ -48,7 +56,11 @@ export default function PatternEditRoute() {
 
   return (
     <>
-      <PageHeader title={p.title} subtitle={p.designerCredit ? `by ${p.designerCredit}` : undefined} action={start} />
+      <PageHeader
+        title={p.title}
+        subtitle={p.designerCredit ? `by ${p.designerCredit}` : undefined}
+        action={start}
+      />
       {p.mine ? (
         <PatternEditor
           key={p.id}

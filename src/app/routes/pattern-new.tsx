@@ -9,7 +9,10 @@ export default function PatternNewRoute() {
   const create = useCreatePattern();
   return (
     <>
-      <PageHeader title="New pattern" subtitle="Type or paste it one round per line; the round table checks each count as you type." />
+      <PageHeader
+        title="New pattern"
+        subtitle="Type or paste it one round per line; the round table checks each count as you type."
+      />
       <PatternEditor
         onSave={(values) => create.mutateAsync(values)}
         onSaved={(p) => navigate(paths.pattern(p.id), { replace: true })}

@@ -25,7 +25,10 @@ export default function PatternsRoute() {
       ) : patterns.isError ? (
         <EmptyState title="Your patterns could not be loaded">{patterns.error.message}</EmptyState>
       ) : (
-        <EmptyState title="No patterns yet" action={<ButtonLink to={paths.newPattern}>Type in a pattern</ButtonLink>}>
+        <EmptyState
+          title="No patterns yet"
+          action={<ButtonLink to={paths.newPattern}>Type in a pattern</ButtonLink>}
+        >
           Type or paste the pattern you are following, and the round table checks every count as you go.
         </EmptyState>
       )}

@@ -38,7 +38,11 @@ export function stitchSize(gauge: GaugeLike | null | undefined, weight?: number 
   if (gauge && gauge.stitches > 0 && gauge.rows > 0) {
     const span = gauge.over === '4in' ? 4 * CM_PER_INCH : 10;
     const per = gauge.over === '4in' ? '4 in' : '10 cm';
-    return { stitchWidthCm: span / gauge.stitches, rowHeightCm: span / gauge.rows, source: `the gauge, ${gauge.stitches} sts and ${gauge.rows} rows per ${per}` };
+    return {
+      stitchWidthCm: span / gauge.stitches,
+      rowHeightCm: span / gauge.rows,
+      source: `the gauge, ${gauge.stitches} sts and ${gauge.rows} rows per ${per}`,
+    };
   }
   const w = weight ?? 3;
   const d = defaultScGaugeCm(w);
@@ -77,7 +81,11 @@ export type SilhouetteShape =
  * while a round that widens a lot mostly spreads outwards. The rise is kept to at least half a row, because
  * stuffing domes the flat increase rounds of a ball. This is an estimate; yarn, hook and hands change it.
  */
-export function silhouetteShape(rounds: SilhouetteRound[], size: StitchSize, marks: SilhouetteMark[] = []): SilhouetteShape {
+export function silhouetteShape(
+  rounds: SilhouetteRound[],
+  size: StitchSize,
+  marks: SilhouetteMark[] = [],
+): SilhouetteShape {
   if (!rounds.length) return { kind: 'empty' };
   const inRounds = rounds.filter((r) => (r.kind ?? 'round') === 'round');
   if (!inRounds.length) return { kind: 'flat', rows: rounds.length };
@@ -118,7 +126,8 @@ export function yAtRound(points: ProfilePoint[], round: number): number | null {
   for (let i = 1; i < points.length; i++) {
     const a = points[i - 1];
     const b = points[i];
-    if (round > a.round && round < b.round) return a.yCm + ((round - a.round) / (b.round - a.round)) * (b.yCm - a.yCm);
+    if (round > a.round && round < b.round)
+      return a.yCm + ((round - a.round) / (b.round - a.round)) * (b.yCm - a.yCm);
   }
   return null;
 }
@@ -131,7 +140,8 @@ export function placementMarks(notes: Note[]): SilhouetteMark[] {
     const between = n.placement?.betweenRounds;
     if (between) return [{ round: (between[0] + between[1]) / 2, label }];
     if (n.placement?.atRound != null) return [{ round: n.placement.atRound, label }];
-    if (n.afterRound != null) return [{ round: n.beforeRound != null ? (n.afterRound + n.beforeRound) / 2 : n.afterRound, label }];
+    if (n.afterRound != null)
+      return [{ round: n.beforeRound != null ? (n.afterRound + n.beforeRound) / 2 : n.afterRound, label }];
     return [];
   });
 }

@@ -1,7 +1,13 @@
 import { useId } from 'react';
 import { Ruler } from 'lucide-react';
 import { cn } from '@/utils/cn';
-import { roundTo, silhouetteShape, type SilhouetteMark, type SilhouetteRound, type StitchSize } from './geometry';
+import {
+  roundTo,
+  silhouetteShape,
+  type SilhouetteMark,
+  type SilhouetteRound,
+  type StitchSize,
+} from './geometry';
 
 const VB_W = 340;
 const SHAPE_W = 170; // room for the widest round
@@ -51,15 +57,19 @@ export function Silhouette({
   const shape = silhouetteShape(rounds, size, marks);
 
   if (shape.kind === 'empty') {
-    return <p className={cn('text-sm text-ink/70 dark:text-oat/70', className)}>The silhouette appears once the piece has rounds.</p>;
+    return (
+      <p className={cn('text-sm text-ink/70 dark:text-oat/70', className)}>
+        The silhouette appears once the piece has rounds.
+      </p>
+    );
   }
   if (shape.kind === 'flat') {
     return (
       <p className={cn('flex items-start gap-2 text-sm text-ink/80 dark:text-oat/80', className)}>
         <Ruler aria-hidden className="mt-0.5 h-4 w-4 shrink-0" />
         <span>
-          This piece is worked in rows ({shape.rows} {shape.rows === 1 ? 'row' : 'rows'}), so it lies flat: no silhouette is drawn, because a profile
-          would not tell you anything true about its shape.
+          This piece is worked in rows ({shape.rows} {shape.rows === 1 ? 'row' : 'rows'}), so it lies flat: no
+          silhouette is drawn, because a profile would not tell you anything true about its shape.
         </span>
       </p>
     );
@@ -81,7 +91,7 @@ export function Silhouette({
     const isLast = i === shape.points.length - 1;
     if (!(i === 0 || isLast || p.round % 5 === 0)) continue;
     const prev = ticks[ticks.length - 1];
-    if (prev && (y(p.yCm) - y(prev.yCm)) < 13) {
+    if (prev && y(p.yCm) - y(prev.yCm) < 13) {
       if (!isLast || ticks.length === 1) continue;
       ticks.pop();
     }
@@ -98,13 +108,42 @@ export function Silhouette({
         className="h-auto w-full max-w-sm text-ink dark:text-oat"
         style={{ maxHeight: `${Math.max(vbH, 120)}px` }}
       >
-        <title id={titleId}>{`${title}: ${dims}, estimate, from round ${first.round} to round ${last.round}.`}</title>
-        <line x1={AXIS_X} x2={AXIS_X} y1={PAD - 6} y2={vbH - PAD + 6} stroke="currentColor" strokeOpacity={0.25} strokeDasharray="3 4" />
-        <path d={path} className="fill-wool stroke-moss dark:fill-[#4a423c] dark:stroke-[#9cc3a8]" strokeWidth={2} strokeLinejoin="round" />
+        <title
+          id={titleId}
+        >{`${title}: ${dims}, estimate, from round ${first.round} to round ${last.round}.`}</title>
+        <line
+          x1={AXIS_X}
+          x2={AXIS_X}
+          y1={PAD - 6}
+          y2={vbH - PAD + 6}
+          stroke="currentColor"
+          strokeOpacity={0.25}
+          strokeDasharray="3 4"
+        />
+        <path
+          d={path}
+          className="fill-wool stroke-moss dark:fill-[#4a423c] dark:stroke-[#9cc3a8]"
+          strokeWidth={2}
+          strokeLinejoin="round"
+        />
         {ticks.map((p) => (
           <g key={`t${p.round}`}>
-            <line x1={AXIS_X - p.radiusCm * scale - 4} x2={AXIS_X - p.radiusCm * scale} y1={y(p.yCm)} y2={y(p.yCm)} stroke="currentColor" strokeOpacity={0.4} />
-            <text x={4} y={y(p.yCm) + 4} fontSize={11} fill="currentColor" fillOpacity={0.7} className="tabular">
+            <line
+              x1={AXIS_X - p.radiusCm * scale - 4}
+              x2={AXIS_X - p.radiusCm * scale}
+              y1={y(p.yCm)}
+              y2={y(p.yCm)}
+              stroke="currentColor"
+              strokeOpacity={0.4}
+            />
+            <text
+              x={4}
+              y={y(p.yCm) + 4}
+              fontSize={11}
+              fill="currentColor"
+              fillOpacity={0.7}
+              className="tabular"
+            >
               {`R${p.round}`}
             </text>
           </g>
@@ -114,7 +153,15 @@ export function Silhouette({
           return (
             <g key={`m${i}`}>
               <title>{`${m.label} at round ${m.round}`}</title>
-              <line x1={AXIS_X - SHAPE_W / 2} x2={LABEL_X - 4} y1={my} y2={my} className="stroke-clay" strokeWidth={1.5} strokeDasharray="5 3" />
+              <line
+                x1={AXIS_X - SHAPE_W / 2}
+                x2={LABEL_X - 4}
+                y1={my}
+                y2={my}
+                className="stroke-clay"
+                strokeWidth={1.5}
+                strokeDasharray="5 3"
+              />
               <circle cx={LABEL_X - 4} cy={my} r={3.5} className="fill-clay" />
               <text x={LABEL_X + 4} y={my + 4} fontSize={12} fontWeight={600} fill="currentColor">
                 {`◆ ${short(m.label)}`}

@@ -46,7 +46,8 @@ const dialogWith = (text: RegExp) => {
   return d;
 };
 const roundTable = () => screen.getByRole('region', { name: 'Round table' });
-const rowFor = (label: string) => within(roundTable()).getByRole('row', { name: new RegExp(`^${label}(,|$)`) });
+const rowFor = (label: string) =>
+  within(roundTable()).getByRole('row', { name: new RegExp(`^${label}(,|$)`) });
 
 async function openNew() {
   renderRoute('/patterns/new');
@@ -57,7 +58,10 @@ async function openNew() {
 describe('the round table', () => {
   it('updates as you type and shows a problem at its line, then clears when it is fixed', async () => {
     const user = await openNew();
-    await user.type(instructions(), 'Rnd 1: 6 sc in MR (6){Enter}Rnd 2: inc x6 (12){Enter}Rnd 3: (sc, inc) x6 (20)');
+    await user.type(
+      instructions(),
+      'Rnd 1: 6 sc in MR (6){Enter}Rnd 2: inc x6 (12){Enter}Rnd 3: (sc, inc) x6 (20)',
+    );
 
     await waitFor(() => expect(within(roundTable()).getAllByRole('row')).toHaveLength(1 + 3 + 1));
     const r1 = rowFor('Rnd 1');
@@ -90,14 +94,19 @@ describe('the round table', () => {
 
   it('shows notes between rounds with a word, not only an icon', async () => {
     const user = await openNew();
-    await user.type(instructions(), 'Rnd 1: 6 sc in MR (6){Enter}Rnd 2: inc x6 (12){Enter}Place safety eyes between Rnds 1 and 2, 3 sts apart.{Enter}Rnd 3: (sc, inc) x6 (18)');
+    await user.type(
+      instructions(),
+      'Rnd 1: 6 sc in MR (6){Enter}Rnd 2: inc x6 (12){Enter}Place safety eyes between Rnds 1 and 2, 3 sts apart.{Enter}Rnd 3: (sc, inc) x6 (18)',
+    );
     const table = await waitFor(() => {
       const t = roundTable();
       expect(within(t).getByText(/Placement:/)).toBeInTheDocument();
       return t;
     });
     // in text order: after Rnd 2, before Rnd 3
-    const rows = within(table).getAllByRole('row').map((r) => r.textContent ?? '');
+    const rows = within(table)
+      .getAllByRole('row')
+      .map((r) => r.textContent ?? '');
     const at = rows.findIndex((t) => /Placement:/.test(t));
     expect(rows[at - 1]).toMatch(/Rnd 2/);
     expect(rows[at + 1]).toMatch(/Rnd 3/);
@@ -107,7 +116,10 @@ describe('the round table', () => {
 describe('the round planner', () => {
   it('starts from the round above the caret and inserts the planned round after its line', async () => {
     const user = await openNew();
-    await user.type(instructions(), 'Rnd 1: 6 sc in MR (6){Enter}Rnd 2: inc x6 (12){Enter}Rnd 3: (sc, inc) x6 (18)');
+    await user.type(
+      instructions(),
+      'Rnd 1: 6 sc in MR (6){Enter}Rnd 2: inc x6 (12){Enter}Rnd 3: (sc, inc) x6 (18)',
+    );
     await user.click(screen.getByRole('button', { name: 'Round planner' }));
     const planner = screen.getByRole('group', { name: 'Round planner' });
     const before = within(planner).getByLabelText('Stitches before');
@@ -119,7 +131,9 @@ describe('the round planner', () => {
     expect(within(planner).getByText(/Makes/)).toHaveTextContent('Makes 24 stitches from 18');
 
     await user.click(within(planner).getByRole('button', { name: 'Insert as Rnd 4' }));
-    expect(instructions().value).toBe('Rnd 1: 6 sc in MR (6)\nRnd 2: inc x6 (12)\nRnd 3: (sc, inc) x6 (18)\nRnd 4: (2 sc, inc) x6 (24)');
+    expect(instructions().value).toBe(
+      'Rnd 1: 6 sc in MR (6)\nRnd 2: inc x6 (12)\nRnd 3: (sc, inc) x6 (18)\nRnd 4: (2 sc, inc) x6 (24)',
+    );
     await waitFor(() => expect(within(rowFor('Rnd 4')).getAllByRole('cell')[1]).toHaveTextContent('24'));
 
     // With the caret back on Rnd 2, it starts from 12 and the new round goes right after Rnd 2.
@@ -142,7 +156,9 @@ describe('the round planner', () => {
     await user.type(within(planner).getByLabelText('Stitches wanted'), '18');
     await user.click(within(planner).getByLabelText('Stagger the increases or decreases'));
     // Source: US sc is UK dc (standards.md §4, US/UK terms).
-    expect(within(planner).getByRole('status', { name: 'Planned round' })).toHaveTextContent('Rnd 3: (dc, inc) x6 (18)');
+    expect(within(planner).getByRole('status', { name: 'Planned round' })).toHaveTextContent(
+      'Rnd 3: (dc, inc) x6 (18)',
+    );
     expect(within(planner).getByText(/Makes/)).toHaveTextContent('Makes 18 stitches from 12');
   });
 
@@ -200,7 +216,14 @@ describe('hooks, yarn weights and the safety caution', () => {
     const weight = screen.getByLabelText(/^Weight/) as HTMLSelectElement;
     const labels = [...weight.options].map((o) => o.textContent);
     // Source: Craft Yarn Council Standard Yarn Weight System (categories 0–7).
-    expect(labels).toEqual(expect.arrayContaining(['Fingering, Lace (0)', 'DK, Light (3)', 'Worsted, Medium (4)', 'Jumbo, Jumbo (7)']));
+    expect(labels).toEqual(
+      expect.arrayContaining([
+        'Fingering, Lace (0)',
+        'DK, Light (3)',
+        'Worsted, Medium (4)',
+        'Jumbo, Jumbo (7)',
+      ]),
+    );
     await user.type(screen.getByLabelText('Ply (as on the ball band)'), '8 ply');
     // Common practice (AU/NZ/UK ply names; a convention, shown with ≈): 8 ply ≈ DK, Light (3).
     expect(screen.getByText('≈ DK, Light (3)')).toBeInTheDocument();
@@ -251,8 +274,16 @@ describe('saving', () => {
     await user.type(instructions(), 'Rnd 1: 6 sc in MR (6)');
     await user.click(screen.getByRole('button', { name: 'Save pattern' }));
     expect(await screen.findByRole('heading', { name: 'Sprout' }, { timeout: 5000 })).toBeInTheDocument();
-    expect(body).toMatchObject({ title: 'Sprout', terms: 'us', visibility: 'private', pieces: [{ name: 'Head', copies: 2, hookMm: 3.5, instructions: 'Rnd 1: 6 sc in MR (6)' }] });
-    expect(screen.getByRole('link', { name: 'Start a project from this pattern' })).toHaveAttribute('href', '/projects/new?patternId=52');
+    expect(body).toMatchObject({
+      title: 'Sprout',
+      terms: 'us',
+      visibility: 'private',
+      pieces: [{ name: 'Head', copies: 2, hookMm: 3.5, instructions: 'Rnd 1: 6 sc in MR (6)' }],
+    });
+    expect(screen.getByRole('link', { name: 'Start a project from this pattern' })).toHaveAttribute(
+      'href',
+      '/projects/new?patternId=52',
+    );
   });
 
   it('sends piece ids back on save so they stay the same, and asks before deleting', async () => {
@@ -276,7 +307,9 @@ describe('saving', () => {
     expect(screen.getByText('Unsaved changes')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Save changes' }));
     await waitFor(() => expect(patch).not.toBeNull());
-    expect(patch.pieces).toEqual([{ id: 7, name: 'Pebble', copies: 1, hookMm: 3.5, yarns: [], instructions: p.pieces[0].instructions }]);
+    expect(patch.pieces).toEqual([
+      { id: 7, name: 'Pebble', copies: 1, hookMm: 3.5, yarns: [], instructions: p.pieces[0].instructions },
+    ]);
     expect(await screen.findByText('Saved')).toBeInTheDocument();
 
     await user.click(screen.getByRole('button', { name: 'Delete pattern' }));
@@ -290,7 +323,10 @@ describe('saving', () => {
   });
 
   it('asks before leaving with unsaved changes', async () => {
-    server.use(http.get('*/api/patterns', () => HttpResponse.json({ patterns: [] })), http.get('*/api/projects', () => HttpResponse.json({ projects: [] })));
+    server.use(
+      http.get('*/api/patterns', () => HttpResponse.json({ patterns: [] })),
+      http.get('*/api/projects', () => HttpResponse.json({ projects: [] })),
+    );
     const { router } = renderRoute('/patterns/new');
     const user = userEvent.setup();
     await user.type(await screen.findByLabelText('Title', {}, { timeout: 5000 }), 'Half-typed');
@@ -306,19 +342,34 @@ describe('saving', () => {
 
 describe('someone else’s public pattern', () => {
   it('is shown read-only, with its round table, and can start a project', async () => {
-    server.use(http.get('*/api/patterns/41', () => HttpResponse.json({ pattern: makePattern({ mine: false, visibility: 'public' }) })));
+    server.use(
+      http.get('*/api/patterns/41', () =>
+        HttpResponse.json({ pattern: makePattern({ mine: false, visibility: 'public' }) }),
+      ),
+    );
     renderRoute('/patterns/41');
     expect(await screen.findByText('Read-only', {}, { timeout: 5000 })).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Save/ })).not.toBeInTheDocument();
     expect(screen.queryByLabelText('Title')).not.toBeInTheDocument();
-    expect(within(screen.getByRole('region', { name: 'Round table' })).getByText('Rnd 2')).toBeInTheDocument();
-    expect(screen.getByRole('link', { name: 'Start a project from this pattern' })).toHaveAttribute('href', '/projects/new?patternId=41');
+    expect(
+      within(screen.getByRole('region', { name: 'Round table' })).getByText('Rnd 2'),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Start a project from this pattern' })).toHaveAttribute(
+      'href',
+      '/projects/new?patternId=41',
+    );
   });
 
   it('answers a missing pattern with a page, not a crash', async () => {
-    server.use(http.get('*/api/patterns/404', () => HttpResponse.json({ error: 'That pattern could not be found.' }, { status: 404 })));
+    server.use(
+      http.get('*/api/patterns/404', () =>
+        HttpResponse.json({ error: 'That pattern could not be found.' }, { status: 404 }),
+      ),
+    );
     renderRoute('/patterns/404');
-    expect(await screen.findByText('That pattern could not be found', {}, { timeout: 5000 })).toBeInTheDocument();
+    expect(
+      await screen.findByText('That pattern could not be found', {}, { timeout: 5000 }),
+    ).toBeInTheDocument();
   });
 });
 
@@ -328,8 +379,24 @@ describe('the pattern list', () => {
       http.get('*/api/patterns', () =>
         HttpResponse.json({
           patterns: [
-            { id: 1, title: 'Sprout', designerCredit: null, pieceCount: 3, problemCount: 2, updatedAt: '2026-12-01T10:00:00.000Z', visibility: 'public' },
-            { id: 2, title: 'Pebble', designerCredit: 'Test studio', pieceCount: 1, problemCount: 0, updatedAt: '2026-11-30T10:00:00.000Z', visibility: 'private' },
+            {
+              id: 1,
+              title: 'Sprout',
+              designerCredit: null,
+              pieceCount: 3,
+              problemCount: 2,
+              updatedAt: '2026-12-01T10:00:00.000Z',
+              visibility: 'public',
+            },
+            {
+              id: 2,
+              title: 'Pebble',
+              designerCredit: 'Test studio',
+              pieceCount: 1,
+              problemCount: 0,
+              updatedAt: '2026-11-30T10:00:00.000Z',
+              visibility: 'private',
+            },
           ],
         }),
       ),

@@ -4,7 +4,8 @@ import { placementMarks, silhouetteShape, stitchSize, yAtRound } from '@/compone
 import { Silhouette } from '@/components/silhouette/silhouette';
 import type { Note } from '@/engine/types';
 
-const tube = (n: number, sts: number) => Array.from({ length: n }, (_, i) => ({ number: i + 1, stitches: sts, kind: 'round' as const }));
+const tube = (n: number, sts: number) =>
+  Array.from({ length: n }, (_, i) => ({ number: i + 1, stitches: sts, kind: 'round' as const }));
 
 describe('stitch size for the silhouette', () => {
   it('comes from the gauge: cm per stitch = 10 ÷ sts per 10 cm, or 10.16 ÷ sts per 4 in', () => {
@@ -68,16 +69,37 @@ describe('silhouette geometry', () => {
   });
 
   it('gives no shape for a piece worked in rows', () => {
-    expect(silhouetteShape([{ number: 1, stitches: 10, kind: 'row' }, { number: 2, stitches: 10, kind: 'row' }], size)).toEqual({ kind: 'flat', rows: 2 });
+    expect(
+      silhouetteShape(
+        [
+          { number: 1, stitches: 10, kind: 'row' },
+          { number: 2, stitches: 10, kind: 'row' },
+        ],
+        size,
+      ),
+    ).toEqual({ kind: 'flat', rows: 2 });
     expect(silhouetteShape([], size)).toEqual({ kind: 'empty' });
   });
 
   it('reads placement notes as marks', () => {
-    const note = (n: Partial<Note>): Note => ({ line: 0, text: 'x', kind: 'placement', afterRound: null, beforeRound: null, ...n });
+    const note = (n: Partial<Note>): Note => ({
+      line: 0,
+      text: 'x',
+      kind: 'placement',
+      afterRound: null,
+      beforeRound: null,
+      ...n,
+    });
     expect(
       placementMarks([
-        note({ text: 'Place safety eyes between Rnds 9 and 10', placement: { label: 'Safety eyes', betweenRounds: [9, 10], atRound: null, apart: 6 } }),
-        note({ text: 'Sew the arm at Rnd 4', placement: { label: 'Arm', betweenRounds: null, atRound: 4, apart: null } }),
+        note({
+          text: 'Place safety eyes between Rnds 9 and 10',
+          placement: { label: 'Safety eyes', betweenRounds: [9, 10], atRound: null, apart: 6 },
+        }),
+        note({
+          text: 'Sew the arm at Rnd 4',
+          placement: { label: 'Arm', betweenRounds: null, atRound: 4, apart: null },
+        }),
         note({ text: 'Stuff firmly', kind: 'stuffing', afterRound: 8, beforeRound: 9 }),
         note({ text: 'Add the tail here', afterRound: 5, beforeRound: 6 }),
       ]),
@@ -91,7 +113,14 @@ describe('silhouette geometry', () => {
 
 describe('<Silhouette>', () => {
   it('draws the profile with its size in cm and in, labelled as an estimate, and the marks', () => {
-    render(<Silhouette rounds={tube(10, 20)} size={{ stitchWidthCm: 0.5, rowHeightCm: 0.4, source: 'the gauge' }} marks={[{ round: 5, label: 'Safety eyes' }]} title="Leg" />);
+    render(
+      <Silhouette
+        rounds={tube(10, 20)}
+        size={{ stitchWidthCm: 0.5, rowHeightCm: 0.4, source: 'the gauge' }}
+        marks={[{ round: 5, label: 'Safety eyes' }]}
+        title="Leg"
+      />,
+    );
     const img = screen.getByRole('img');
     expect(img).toHaveAccessibleName(/Leg: about 3\.2 cm wide and 4 cm tall \(1\.3 × 1\.6 in\), estimate/);
     expect(screen.getByText(/Estimate:/)).toBeInTheDocument();
@@ -99,7 +128,12 @@ describe('<Silhouette>', () => {
   });
 
   it('shows a note instead of a shape for flat pieces', () => {
-    render(<Silhouette rounds={[{ number: 1, stitches: 10, kind: 'row' }]} size={{ stitchWidthCm: 0.5, rowHeightCm: 0.4, source: 'x' }} />);
+    render(
+      <Silhouette
+        rounds={[{ number: 1, stitches: 10, kind: 'row' }]}
+        size={{ stitchWidthCm: 0.5, rowHeightCm: 0.4, source: 'x' }}
+      />,
+    );
     expect(screen.queryByRole('img')).not.toBeInTheDocument();
     expect(screen.getByText(/worked in rows/)).toBeInTheDocument();
   });

@@ -13,7 +13,10 @@ afterAll(() => t.close());
 
 const pebble = buildPattern().pieces[0];
 
-async function newPattern(agent: ReturnType<typeof request.agent>, overrides: Parameters<typeof buildPattern>[0] = {}) {
+async function newPattern(
+  agent: ReturnType<typeof request.agent>,
+  overrides: Parameters<typeof buildPattern>[0] = {},
+) {
   const res = await agent.post('/api/patterns').send(buildPattern(overrides));
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return res.body.pattern as Pattern;
@@ -28,24 +31,47 @@ describe('POST /api/patterns', () => {
         sourceUrl: 'https://example.com/pebble',
         gauge: { stitches: 22, rows: 24, over: '10cm', stitch: 'sc', hookMm: 3.5 },
         pieces: [{ ...pebble, copies: 2, yarns: ['Moss cotton'] }],
-        materials: { yarns: [{ name: 'Moss cotton', weight: 3, ply: '8 ply', metersPerSkein: 125 }], hooks: [{ mm: 3.5 }], notions: [] },
+        materials: {
+          yarns: [{ name: 'Moss cotton', weight: 3, ply: '8 ply', metersPerSkein: 125 }],
+          hooks: [{ mm: 3.5 }],
+          notions: [],
+        },
       }),
     );
     expect(res.status).toBe(201);
     expect(res.headers.location).toBe(`/api/patterns/${res.body.pattern.id}`);
     const p = res.body.pattern as Pattern;
-    expect(p).toMatchObject({ title: 'Moss pebble', terms: 'us', visibility: 'private', mine: true, sourceUrl: 'https://example.com/pebble', cautions: [] });
+    expect(p).toMatchObject({
+      title: 'Moss pebble',
+      terms: 'us',
+      visibility: 'private',
+      mine: true,
+      sourceUrl: 'https://example.com/pebble',
+      cautions: [],
+    });
     expect(p.gauge).toEqual({ stitches: 22, rows: 24, over: '10cm', stitch: 'sc', hookMm: 3.5 });
     expect(p.materials.yarns[0]).toMatchObject({ name: 'Moss cotton', weight: 3 });
     expect(p.pieces).toHaveLength(1);
     const piece = p.pieces[0];
-    expect(piece).toMatchObject({ name: 'Pebble', copies: 2, hookMm: 3.5, yarns: ['Moss cotton'], position: 0 });
+    expect(piece).toMatchObject({
+      name: 'Pebble',
+      copies: 2,
+      hookMm: 3.5,
+      yarns: ['Moss cotton'],
+      position: 0,
+    });
     // Source: Craft Yarn Council hook chart — 3.5 mm is US E-4.
     expect(piece.hook).toEqual({ mm: 3.5, us: 'E-4' });
     // Rnds 4-6 is one line standing for three rounds: 8 rounds from 6 lines.
     expect(piece.check.rounds.map((r) => r.number)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
     expect(piece.check.rounds.map((r) => r.stitches)).toEqual([6, 12, 18, 18, 18, 18, 12, 6]);
-    expect(piece.check.rounds[2]).toMatchObject({ label: 'Rnd 3', line: 2, stated: 18, worked: 12, problems: [] });
+    expect(piece.check.rounds[2]).toMatchObject({
+      label: 'Rnd 3',
+      line: 2,
+      stated: 18,
+      worked: 12,
+      problems: [],
+    });
     expect(piece.check.problemCount).toBe(0);
   });
 
@@ -65,7 +91,9 @@ describe('POST /api/patterns', () => {
 
   it('returns the small-parts caution when the notions include safety eyes', async () => {
     const { agent } = await signedInAgent(t.app, t.db);
-    const p = await newPattern(agent, { materials: { yarns: [], hooks: [], notions: [{ kind: 'safety_eyes', sizeMm: 8, quantity: 2 }] } });
+    const p = await newPattern(agent, {
+      materials: { yarns: [], hooks: [], notions: [{ kind: 'safety_eyes', sizeMm: 8, quantity: 2 }] },
+    });
     expect(p.cautions.map((c) => c.code)).toEqual(['small-parts']);
     expect(p.cautions[0].message).toMatch(/choking hazard for children under 3/);
     expect(p.cautions[0].message).toMatch(/16 CFR 1501/);
@@ -73,7 +101,12 @@ describe('POST /api/patterns', () => {
 
   it('gives a hook with no US name in the chart as us: null, and a piece without a hook as hook: null', async () => {
     const { agent } = await signedInAgent(t.app, t.db);
-    const p = await newPattern(agent, { pieces: [{ ...pebble, hookMm: 2.5 }, { ...pebble, name: 'Spare', hookMm: null }] });
+    const p = await newPattern(agent, {
+      pieces: [
+        { ...pebble, hookMm: 2.5 },
+        { ...pebble, name: 'Spare', hookMm: null },
+      ],
+    });
     // Source: Craft Yarn Council hook chart lists no US size for 2.5 mm.
     expect(p.pieces[0].hook).toEqual({ mm: 2.5, us: null });
     expect(p.pieces[1].hook).toBeNull();
@@ -123,7 +156,13 @@ describe('GET /api/patterns', () => {
     await newPattern(other, { title: 'Not yours', visibility: 'public' });
     const first = await newPattern(agent, { title: 'First' });
     const wrong = pebble.instructions.replace('Rnd 2: inc x6 (12)', 'Rnd 2: inc x6 (13)');
-    const second = await newPattern(agent, { title: 'Second', pieces: [{ ...pebble, instructions: wrong }, { ...pebble, name: 'Twin' }] });
+    const second = await newPattern(agent, {
+      title: 'Second',
+      pieces: [
+        { ...pebble, instructions: wrong },
+        { ...pebble, name: 'Twin' },
+      ],
+    });
     const res = await agent.get('/api/patterns');
     expect(res.status).toBe(200);
     expect(res.body.patterns.map((p: { title: string }) => p.title)).toEqual(['Second', 'First']);
@@ -188,7 +227,9 @@ describe('GET /api/patterns/:id', () => {
     expect(del.status).toBe(403);
     expect((await agent.get(`/api/patterns/${open.id}`)).body.pattern.title).toBe('Open pebble');
     // and it is not in their list
-    expect((await other.get('/api/patterns')).body.patterns.map((p: { id: number }) => p.id)).not.toContain(open.id);
+    expect((await other.get('/api/patterns')).body.patterns.map((p: { id: number }) => p.id)).not.toContain(
+      open.id,
+    );
   });
 });
 
@@ -197,21 +238,41 @@ describe('PATCH /api/patterns/:id', () => {
     const { agent } = await signedInAgent(t.app, t.db);
     const made = await newPattern(agent, { skillNotes: 'Easy.' });
     await new Promise((r) => setTimeout(r, 5));
-    const res = await agent.patch(`/api/patterns/${made.id}`).send({ title: 'Renamed pebble', terms: 'uk', sourceUrl: '' });
+    const res = await agent
+      .patch(`/api/patterns/${made.id}`)
+      .send({ title: 'Renamed pebble', terms: 'uk', sourceUrl: '' });
     expect(res.status).toBe(200);
     const p = res.body.pattern as Pattern;
-    expect(p).toMatchObject({ title: 'Renamed pebble', terms: 'uk', skillNotes: 'Easy.', sourceUrl: null, designerCredit: 'Test studio' });
+    expect(p).toMatchObject({
+      title: 'Renamed pebble',
+      terms: 'uk',
+      skillNotes: 'Easy.',
+      sourceUrl: null,
+      designerCredit: 'Test studio',
+    });
     expect(p.pieces.map((x) => x.id)).toEqual(made.pieces.map((x) => x.id));
     expect(p.updatedAt > made.updatedAt).toBe(true);
   });
 
   it('replaces the pieces when they are sent, keeping the ids of the pieces sent back', async () => {
     const { agent } = await signedInAgent(t.app, t.db);
-    const made = await newPattern(agent, { pieces: [{ ...pebble, name: 'Body' }, { ...pebble, name: 'Ear', copies: 2 }, { ...pebble, name: 'Tail' }] });
+    const made = await newPattern(agent, {
+      pieces: [
+        { ...pebble, name: 'Body' },
+        { ...pebble, name: 'Ear', copies: 2 },
+        { ...pebble, name: 'Tail' },
+      ],
+    });
     const [body, ear, tail] = made.pieces;
     const res = await agent.patch(`/api/patterns/${made.id}`).send({
       pieces: [
-        { id: ear.id, name: 'Ear', copies: 2, hookMm: 3, instructions: 'Rnd 1: 6 sc in MR (6)\nRnd 2: inc x6 (12)' },
+        {
+          id: ear.id,
+          name: 'Ear',
+          copies: 2,
+          hookMm: 3,
+          instructions: 'Rnd 1: 6 sc in MR (6)\nRnd 2: inc x6 (12)',
+        },
         { id: body.id, name: 'Body', copies: 1, hookMm: 3.5, instructions: body.instructions },
         { name: 'Arm', copies: 2, hookMm: 3.5, instructions: 'Rnd 1: 5 sc in MR (5)' },
       ],
@@ -228,12 +289,14 @@ describe('PATCH /api/patterns/:id', () => {
     expect(await t.db('pattern_pieces').where({ id: tail.id }).first()).toBeUndefined();
   });
 
-  it("never takes over a piece of another pattern by its id: that piece becomes a new one", async () => {
+  it('never takes over a piece of another pattern by its id: that piece becomes a new one', async () => {
     const { agent } = await signedInAgent(t.app, t.db);
     const { agent: other } = await signedInAgent(t.app, t.db);
     const theirs = await newPattern(other, { title: 'Their pattern' });
     const mine = await newPattern(agent);
-    const res = await agent.patch(`/api/patterns/${mine.id}`).send({ pieces: [{ id: theirs.pieces[0].id, name: 'Sneaky', copies: 1, instructions: '' }] });
+    const res = await agent
+      .patch(`/api/patterns/${mine.id}`)
+      .send({ pieces: [{ id: theirs.pieces[0].id, name: 'Sneaky', copies: 1, instructions: '' }] });
     expect(res.status).toBe(200);
     expect(res.body.pattern.pieces[0].id).not.toBe(theirs.pieces[0].id);
     const still = await other.get(`/api/patterns/${theirs.id}`);
@@ -243,7 +306,13 @@ describe('PATCH /api/patterns/:id', () => {
   it('refuses bad input with 422 and leaves the pattern as it was', async () => {
     const { agent } = await signedInAgent(t.app, t.db);
     const made = await newPattern(agent);
-    for (const body of [{}, { title: '' }, { pieces: {} }, { pieces: [{ ...pebble, copies: 0 }] }, { sourceUrl: 'data:text/html,hi' }]) {
+    for (const body of [
+      {},
+      { title: '' },
+      { pieces: {} },
+      { pieces: [{ ...pebble, copies: 0 }] },
+      { sourceUrl: 'data:text/html,hi' },
+    ]) {
       const res = await agent.patch(`/api/patterns/${made.id}`).send(body);
       expect(res.status, JSON.stringify(body)).toBe(422);
       expect(res.body.issues.length).toBeGreaterThan(0);
@@ -265,8 +334,13 @@ describe('DELETE /api/patterns/:id', () => {
   it('deletes the pattern and its pieces; projects started from it keep their own copy', async () => {
     const { agent, user } = await signedInAgent(t.app, t.db);
     const made = await newPattern(agent);
-    const [{ id: projectId }] = await t.db('projects').insert({ owner_id: user.id, pattern_id: made.id, title: 'My pebble' }).returning('id');
-    await t.db('project_pieces').insert({ project_id: projectId, name: 'Pebble', instructions: pebble.instructions });
+    const [{ id: projectId }] = await t
+      .db('projects')
+      .insert({ owner_id: user.id, pattern_id: made.id, title: 'My pebble' })
+      .returning('id');
+    await t
+      .db('project_pieces')
+      .insert({ project_id: projectId, name: 'Pebble', instructions: pebble.instructions });
 
     const res = await agent.delete(`/api/patterns/${made.id}`);
     expect(res.status).toBe(204);
@@ -274,7 +348,9 @@ describe('DELETE /api/patterns/:id', () => {
     expect(await t.db('pattern_pieces').where({ pattern_id: made.id })).toEqual([]);
     const project = await t.db('projects').where({ id: projectId }).first();
     expect(project.pattern_id).toBeNull();
-    expect(await t.db('project_pieces').where({ project_id: projectId }).first()).toMatchObject({ instructions: pebble.instructions });
+    expect(await t.db('project_pieces').where({ project_id: projectId }).first()).toMatchObject({
+      instructions: pebble.instructions,
+    });
     expect((await agent.delete(`/api/patterns/${made.id}`)).status).toBe(404);
   });
 });

@@ -6,7 +6,8 @@ import { patternKeys } from './keys';
 
 export { CreatePatternSchema } from '@/schemas/pattern';
 
-export const createPattern = async (input: CreatePatternInput) => (await apiPost<{ pattern: Pattern }>('/patterns', input)).pattern;
+export const createPattern = async (input: CreatePatternInput) =>
+  (await apiPost<{ pattern: Pattern }>('/patterns', input)).pattern;
 
 export function useCreatePattern() {
   const qc = useQueryClient();

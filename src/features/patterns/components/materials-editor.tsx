@@ -12,7 +12,17 @@ const numberOrUndefined = (v: unknown) => (v === '' || v == null ? undefined : N
 const M_PER_YD = 0.9144;
 const SIZED = new Set(['safety_eyes', 'buttons', 'beads']);
 
-function Group({ title, children, onAdd, addLabel }: { title: string; children: React.ReactNode; onAdd: () => void; addLabel: string }) {
+function Group({
+  title,
+  children,
+  onAdd,
+  addLabel,
+}: {
+  title: string;
+  children: React.ReactNode;
+  onAdd: () => void;
+  addLabel: string;
+}) {
   return (
     <fieldset className="flex flex-col gap-3">
       <legend className="mb-1 text-lg font-bold">{title}</legend>
@@ -30,6 +40,7 @@ function RemoveButton({ label, onClick }: { label: string; onClick: () => void }
   return (
     <Button variant="quiet" className="text-clay" aria-label={label} title={label} onClick={onClick}>
       <Trash2 aria-hidden className="h-5 w-5" />
+      <span className="sm:sr-only">Remove</span>
     </Button>
   );
 }
@@ -45,7 +56,11 @@ function YarnRow({ index, onRemove }: { index: number; onRemove: () => void }) {
     <div className="grid gap-3 rounded-soft bg-wool/40 p-3 sm:grid-cols-3 dark:bg-white/5">
       <TextField label="Yarn name" error={e?.name?.message} {...register(`materials.yarns.${index}.name`)} />
       <TextField label="Colour" {...register(`materials.yarns.${index}.colour`)} />
-      <TextField label="Fibre" placeholder="cotton, acrylic…" {...register(`materials.yarns.${index}.fibre`)} />
+      <TextField
+        label="Fibre"
+        placeholder="cotton, acrylic…"
+        {...register(`materials.yarns.${index}.fibre`)}
+      />
       {/* Controlled from the form value too, so "Use this weight" shows at once in every DOM. */}
       <SelectField
         label="Weight"
@@ -61,7 +76,11 @@ function YarnRow({ index, onRemove }: { index: number; onRemove: () => void }) {
         ))}
       </SelectField>
       <div className="flex flex-col gap-1.5">
-        <TextField label="Ply (as on the ball band)" placeholder="8 ply" {...register(`materials.yarns.${index}.ply`)} />
+        <TextField
+          label="Ply (as on the ball band)"
+          placeholder="8 ply"
+          {...register(`materials.yarns.${index}.ply`)}
+        />
         {plyCat !== undefined ? (
           <p className="text-sm">
             <span className="font-semibold">≈ {yarnWeightLabel(plyCat)}</span>{' '}
@@ -76,7 +95,9 @@ function YarnRow({ index, onRemove }: { index: number; onRemove: () => void }) {
             ) : null}
           </p>
         ) : yarn?.ply ? (
-          <p className="text-sm text-ink/70 dark:text-oat/70">No weight category is known for “{yarn.ply}”.</p>
+          <p className="text-sm text-ink/70 dark:text-oat/70">
+            No weight category is known for “{yarn.ply}”.
+          </p>
         ) : null}
       </div>
       <div className="grid grid-cols-2 gap-3">
@@ -118,9 +139,15 @@ function HookRow({ index, onRemove }: { index: number; onRemove: () => void }) {
         step="0.05"
         hint={label}
         error={e?.mm?.message}
-        {...register(`materials.hooks.${index}.mm`, { setValueAs: (v) => (v === '' ? Number.NaN : Number(v)) })}
+        {...register(`materials.hooks.${index}.mm`, {
+          setValueAs: (v) => (v === '' ? Number.NaN : Number(v)),
+        })}
       />
-      <TextField label="What it is for" placeholder="body, small details…" {...register(`materials.hooks.${index}.note`)} />
+      <TextField
+        label="What it is for"
+        placeholder="body, small details…"
+        {...register(`materials.hooks.${index}.note`)}
+      />
       <div className="sm:pt-8">
         <RemoveButton label={`Remove hook ${label ?? index + 1}`} onClick={onRemove} />
       </div>
@@ -152,7 +179,13 @@ function NotionRow({ index, onRemove }: { index: number; onRemove: () => void })
       ) : (
         <div className="hidden sm:block" />
       )}
-      <TextField label="How many" type="number" inputMode="numeric" error={e?.quantity?.message} {...register(`materials.notions.${index}.quantity`, { setValueAs: numberOrUndefined })} />
+      <TextField
+        label="How many"
+        type="number"
+        inputMode="numeric"
+        error={e?.quantity?.message}
+        {...register(`materials.notions.${index}.quantity`, { setValueAs: numberOrUndefined })}
+      />
       <TextField label="Note" {...register(`materials.notions.${index}.note`)} />
       <div className="sm:pt-8">
         <RemoveButton label={`Remove ${notionLabels[kind as NotionKind] ?? 'notion'}`} onClick={onRemove} />
@@ -185,7 +218,8 @@ export function MaterialsEditor() {
         ))}
       </Group>
       <p className="text-xs text-ink/70 dark:text-oat/70">
-        Weight categories: Craft Yarn Council&apos;s www.YarnStandards.com. Ply names are a convention, not a standard, so they are shown with ≈.
+        Weight categories: Craft Yarn Council&apos;s www.YarnStandards.com. Ply names are a convention, not a
+        standard, so they are shown with ≈.
       </p>
     </div>
   );

@@ -4,7 +4,12 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useBlocker } from 'react-router-dom';
 import { CheckCircle2, Globe, Lock, Save, Users } from 'lucide-react';
 import { cautionsFor } from '@/reference/safety';
-import { CreatePatternSchema, patternVisibilityLabels, type CreatePatternFormValues, type CreatePatternInput } from '@/schemas/pattern';
+import {
+  CreatePatternSchema,
+  patternVisibilityLabels,
+  type CreatePatternFormValues,
+  type CreatePatternInput,
+} from '@/schemas/pattern';
 import type { Pattern } from '@/types/api';
 import { ApiError } from '@/lib/api-client';
 import { Banner } from '@/components/ui/banner';
@@ -38,7 +43,14 @@ export function toFormValues(p?: Pattern): CreatePatternFormValues {
     sourceUrl: p.sourceUrl ?? '',
     gauge: p.gauge,
     skillNotes: p.skillNotes ?? '',
-    pieces: p.pieces.map((x) => ({ id: x.id, name: x.name, copies: x.copies, hookMm: x.hookMm, instructions: x.instructions, yarns: x.yarns })),
+    pieces: p.pieces.map((x) => ({
+      id: x.id,
+      name: x.name,
+      copies: x.copies,
+      hookMm: x.hookMm,
+      instructions: x.instructions,
+      yarns: x.yarns,
+    })),
     materials: p.materials,
     visibility: p.visibility,
   };
@@ -46,8 +58,14 @@ export function toFormValues(p?: Pattern): CreatePatternFormValues {
 
 const visibilityLook = {
   private: { icon: <Lock aria-hidden className="h-5 w-5" />, text: 'Only you can see it.' },
-  testers: { icon: <Users aria-hidden className="h-5 w-5" />, text: 'For the testers you invite (inviting testers comes later; until then it stays as private).' },
-  public: { icon: <Globe aria-hidden className="h-5 w-5" />, text: 'Any signed-in member can read it and start a project from it. Only you can change it.' },
+  testers: {
+    icon: <Users aria-hidden className="h-5 w-5" />,
+    text: 'For the testers you invite (inviting testers comes later; until then it stays as private).',
+  },
+  public: {
+    icon: <Globe aria-hidden className="h-5 w-5" />,
+    text: 'Any signed-in member can read it and start a project from it. Only you can change it.',
+  },
 } as const;
 
 function Section({ title, children, id }: { title: string; children: React.ReactNode; id?: string }) {
@@ -101,7 +119,10 @@ export function PatternEditor({
   const [justSaved, setJustSaved] = useState(false);
 
   // Ask before leaving with unsaved changes: in-app navigation through the router, closing the tab through the browser.
-  const blocker = useBlocker(({ currentLocation, nextLocation }) => isDirty && !leaving.current && currentLocation.pathname !== nextLocation.pathname);
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) =>
+      isDirty && !leaving.current && currentLocation.pathname !== nextLocation.pathname,
+  );
   useEffect(() => {
     if (!isDirty) return;
     const warn = (e: BeforeUnloadEvent) => e.preventDefault();
@@ -128,7 +149,12 @@ export function PatternEditor({
 
   return (
     <FormProvider {...form}>
-      <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label={pattern ? `Edit ${pattern.title}` : 'New pattern'}>
+      <form
+        onSubmit={submit}
+        noValidate
+        className="flex flex-col gap-5"
+        aria-label={pattern ? `Edit ${pattern.title}` : 'New pattern'}
+      >
         {saveError ? (
           <Banner tone="warning" title="Not saved yet">
             <p>{saveError.message}</p>
@@ -148,14 +174,37 @@ export function PatternEditor({
         <Section title="About the pattern">
           <TextField label="Title" error={errors.title?.message} {...register('title')} />
           <div className="grid gap-4 sm:grid-cols-2">
-            <TextField label="Designer credit" placeholder="Who wrote it" error={errors.designerCredit?.message} {...register('designerCredit')} />
-            <TextField label="Source link" type="url" inputMode="url" placeholder="https://…" error={errors.sourceUrl?.message} {...register('sourceUrl')} />
+            <TextField
+              label="Designer credit"
+              placeholder="Who wrote it"
+              error={errors.designerCredit?.message}
+              {...register('designerCredit')}
+            />
+            <TextField
+              label="Source link"
+              type="url"
+              inputMode="url"
+              placeholder="https://…"
+              error={errors.sourceUrl?.message}
+              {...register('sourceUrl')}
+            />
           </div>
-          <SelectField label="Written in" hint="The terms the instructions are typed in. You can read them in the other terms beside each piece." error={errors.terms?.message} {...register('terms')}>
+          <SelectField
+            label="Written in"
+            hint="The terms the instructions are typed in. You can read them in the other terms beside each piece."
+            error={errors.terms?.message}
+            {...register('terms')}
+          >
             <option value="us">US terms (sc, hdc, dc)</option>
             <option value="uk">UK terms (dc, htr, tr)</option>
           </SelectField>
-          <TextAreaField label="Skill notes" placeholder="Easy. Worked in continuous spiral rounds…" rows={3} error={errors.skillNotes?.message} {...register('skillNotes')} />
+          <TextAreaField
+            label="Skill notes"
+            placeholder="Easy. Worked in continuous spiral rounds…"
+            rows={3}
+            error={errors.skillNotes?.message}
+            {...register('skillNotes')}
+          />
         </Section>
 
         <Section title="Pieces">
@@ -175,8 +224,16 @@ export function PatternEditor({
           <fieldset className="flex flex-col gap-2">
             <legend className="sr-only">Who can see this pattern</legend>
             {(['private', 'testers', 'public'] as const).map((v) => (
-              <label key={v} className="flex min-h-tap cursor-pointer items-start gap-3 rounded-soft p-2 hover:bg-wool/50 dark:hover:bg-white/5">
-                <input type="radio" value={v} className="mt-1 h-6 w-6 accent-moss" {...register('visibility')} />
+              <label
+                key={v}
+                className="flex min-h-tap cursor-pointer items-start gap-3 rounded-soft p-2 hover:bg-wool/50 dark:hover:bg-white/5"
+              >
+                <input
+                  type="radio"
+                  value={v}
+                  className="mt-1 h-6 w-6 accent-moss"
+                  {...register('visibility')}
+                />
                 <span className="flex flex-col">
                   <span className="flex items-center gap-2 font-semibold">
                     {visibilityLook[v].icon} {patternVisibilityLabels[v]}
@@ -197,7 +254,8 @@ export function PatternEditor({
         <div
           className={cn(
             'z-10 flex flex-wrap items-center gap-3 rounded-blob p-2 sm:p-3',
-            isDirty && 'sticky bottom-24 bg-oat/95 shadow-lg ring-1 ring-wool backdrop-blur sm:bottom-4 dark:bg-ink/95 dark:ring-[#4a423c]',
+            isDirty &&
+              'sticky bottom-24 bg-oat/95 shadow-lg ring-1 ring-wool backdrop-blur sm:bottom-4 dark:bg-ink/95 dark:ring-[#4a423c]',
           )}
         >
           <Button type="submit" pending={saving}>
@@ -208,7 +266,8 @@ export function PatternEditor({
               <span className="font-semibold">Unsaved changes</span>
             ) : justSaved || pattern ? (
               <span className="inline-flex items-center gap-1">
-                <CheckCircle2 aria-hidden className="h-4 w-4 text-moss" /> {justSaved ? 'Saved' : 'No changes'}
+                <CheckCircle2 aria-hidden className="h-4 w-4 text-moss" />{' '}
+                {justSaved ? 'Saved' : 'No changes'}
               </span>
             ) : null}
           </p>

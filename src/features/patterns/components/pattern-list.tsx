@@ -11,7 +11,8 @@ const visibilityIcon = {
   public: <Globe aria-hidden className="h-4 w-4" />,
 };
 
-const when = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+const when = (iso: string) =>
+  new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 
 export function PatternList({ patterns }: { patterns: PatternListItem[] }) {
   return (
@@ -22,14 +23,17 @@ export function PatternList({ patterns }: { patterns: PatternListItem[] }) {
             <Card className="flex items-center gap-4 transition hover:ring-moss">
               <div className="flex min-w-0 flex-1 flex-col gap-1">
                 <p className="truncate text-lg font-bold">{p.title}</p>
-                {p.designerCredit ? <p className="truncate text-sm text-ink/70 dark:text-oat/70">by {p.designerCredit}</p> : null}
+                {p.designerCredit ? (
+                  <p className="truncate text-sm text-ink/70 dark:text-oat/70">by {p.designerCredit}</p>
+                ) : null}
                 <p className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
                   <span>
                     <span className="tabular">{p.pieceCount}</span> {p.pieceCount === 1 ? 'piece' : 'pieces'}
                   </span>
                   {p.problemCount ? (
                     <span className="inline-flex items-center gap-1 font-semibold text-clay">
-                      <AlertTriangle aria-hidden className="h-4 w-4" /> <span className="tabular">{p.problemCount}</span> to check
+                      <AlertTriangle aria-hidden className="h-4 w-4" />{' '}
+                      <span className="tabular">{p.problemCount}</span> to check
                     </span>
                   ) : (
                     <span className="inline-flex items-center gap-1 text-moss dark:text-[#9cc3a8]">

@@ -9,8 +9,12 @@ import { Card } from '@/components/ui/card';
 import { RoundTable } from './round-table';
 
 function PieceRead({ piece, pattern }: { piece: PatternPiece; pattern: Pattern }) {
-  const check = useMemo(() => checkPiece(piece.instructions, { terms: pattern.terms }), [piece.instructions, pattern.terms]);
-  const weight = pattern.materials.yarns.find((y) => piece.yarns.includes(y.name) && y.weight != null)?.weight ?? null;
+  const check = useMemo(
+    () => checkPiece(piece.instructions, { terms: pattern.terms }),
+    [piece.instructions, pattern.terms],
+  );
+  const weight =
+    pattern.materials.yarns.find((y) => piece.yarns.includes(y.name) && y.weight != null)?.weight ?? null;
   return (
     <Card className="flex flex-col gap-4">
       <h3 className="text-xl font-bold">
@@ -19,7 +23,10 @@ function PieceRead({ piece, pattern }: { piece: PatternPiece; pattern: Pattern }
       </h3>
       {piece.hookMm != null ? <p className="text-sm">Hook: {formatHook(piece.hookMm)}</p> : null}
       <div className="grid gap-4 lg:grid-cols-2">
-        <pre aria-label={`${piece.name} instructions`} className="overflow-x-auto rounded-soft bg-oat px-4 py-3 font-mono text-[0.95rem] leading-6 whitespace-pre-wrap dark:bg-ink">
+        <pre
+          aria-label={`${piece.name} instructions`}
+          className="overflow-x-auto rounded-soft bg-oat px-4 py-3 font-mono text-[0.95rem] leading-6 whitespace-pre-wrap dark:bg-ink"
+        >
           {piece.instructions}
         </pre>
         <div className="flex flex-col gap-4">

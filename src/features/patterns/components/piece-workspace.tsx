@@ -20,7 +20,8 @@ function placeCaret(el: HTMLTextAreaElement, offset: number, end = offset) {
   const line = positionOf(el.value, offset).line;
   const lh = parseFloat(getComputedStyle(el).lineHeight) || 24;
   const top = line * lh;
-  if (top < el.scrollTop || top > el.scrollTop + el.clientHeight - lh) el.scrollTop = Math.max(0, top - el.clientHeight / 3);
+  if (top < el.scrollTop || top > el.scrollTop + el.clientHeight - lh)
+    el.scrollTop = Math.max(0, top - el.clientHeight / 3);
 }
 
 /**
@@ -48,7 +49,10 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
   }
   const [planner, setPlanner] = useState(false);
   const reading = view !== terms;
-  const converted = useMemo(() => (reading ? convertTerms(text, terms, view) : ''), [reading, text, terms, view]);
+  const converted = useMemo(
+    () => (reading ? convertTerms(text, terms, view) : ''),
+    [reading, text, terms, view],
+  );
 
   const caretLine = positionOf(text, Math.min(caret, text.length)).line;
   const above = [...check.rounds].reverse().find((r) => r.line <= caretLine) ?? null;
@@ -57,7 +61,8 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
   const { ref: formRef, ...field } = register(name);
   const error = formState.errors.pieces?.[index]?.instructions?.message;
 
-  const trackCaret = (e: React.SyntheticEvent<HTMLTextAreaElement>) => setCaret(e.currentTarget.selectionStart ?? 0);
+  const trackCaret = (e: React.SyntheticEvent<HTMLTextAreaElement>) =>
+    setCaret(e.currentTarget.selectionStart ?? 0);
 
   const jump = (line: number, column: number | null) => {
     setView(terms);
@@ -89,7 +94,11 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
   return (
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-center gap-2">
-        <div role="radiogroup" aria-label="Show the instructions in" className="inline-flex rounded-soft bg-wool p-1 dark:bg-white/10">
+        <div
+          role="radiogroup"
+          aria-label="Show the instructions in"
+          className="inline-flex rounded-soft bg-wool p-1 dark:bg-white/10"
+        >
           {(['us', 'uk'] as const).map((t) => (
             <button
               key={t}
@@ -99,7 +108,9 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
               onClick={() => setView(t)}
               className={cn(
                 'min-h-tap rounded-[1rem] px-4 text-sm font-semibold',
-                view === t ? 'bg-moss text-oat' : 'text-ink hover:bg-white/60 dark:text-oat dark:hover:bg-white/10',
+                view === t
+                  ? 'bg-moss text-oat'
+                  : 'text-ink hover:bg-white/60 dark:text-oat dark:hover:bg-white/10',
               )}
             >
               {termsName[t]}
@@ -120,7 +131,10 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
       <div className="grid gap-4 lg:grid-cols-2">
         <div className="flex min-w-0 flex-col gap-3">
           <label htmlFor={`${id}-text`} className={cn('font-semibold', reading && 'sr-only')}>
-            Instructions <span className="font-normal text-ink/70 dark:text-oat/70">({termsName[terms]}, one round per line)</span>
+            Instructions{' '}
+            <span className="font-normal text-ink/70 dark:text-oat/70">
+              ({termsName[terms]}, one round per line)
+            </span>
           </label>
           <textarea
             id={`${id}-text`}
@@ -145,7 +159,9 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
               <p className="flex items-center gap-2 font-semibold">
                 <Languages aria-hidden className="h-5 w-5" /> Read in {termsName[view]}
               </p>
-              <p className="text-sm text-ink/70 dark:text-oat/70">A reading view: what you typed stays in {termsName[terms]}. Switch back to edit.</p>
+              <p className="text-sm text-ink/70 dark:text-oat/70">
+                A reading view: what you typed stays in {termsName[terms]}. Switch back to edit.
+              </p>
               <pre
                 aria-label={`Instructions in ${termsName[view]} (read-only)`}
                 className="min-h-64 overflow-x-auto rounded-soft border-2 border-dashed border-wool bg-oat px-4 py-3 font-mono text-[0.95rem] leading-6 whitespace-pre-wrap dark:border-[#4a423c] dark:bg-ink"
@@ -160,7 +176,13 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
             </p>
           ) : null}
           {planner ? (
-            <RoundPlanner defaultFrom={above ? above.stitches : null} nextNumber={(above?.number ?? 0) + 1} kind={kind} terms={terms} onInsert={insert} />
+            <RoundPlanner
+              defaultFrom={above ? above.stitches : null}
+              nextNumber={(above?.number ?? 0) + 1}
+              kind={kind}
+              terms={terms}
+              onInsert={insert}
+            />
           ) : null}
         </div>
         <div className="flex min-w-0 flex-col gap-5">

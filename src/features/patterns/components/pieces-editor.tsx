@@ -12,13 +12,39 @@ import { PieceWorkspace } from './piece-workspace';
 
 const numberOrNull = (v: unknown) => (v === '' || v == null ? null : Number(v));
 
-export const blankPiece = (name = 'Body') => ({ name, copies: 1, hookMm: null, instructions: '', yarns: [] as string[] });
+export const blankPiece = (name = 'Body') => ({
+  name,
+  copies: 1,
+  hookMm: null,
+  instructions: '',
+  yarns: [] as string[],
+});
 
-function PieceTab({ index, selected, onSelect, hasError }: { index: number; selected: boolean; onSelect: () => void; hasError: boolean }) {
+function PieceTab({
+  index,
+  selected,
+  onSelect,
+  hasError,
+}: {
+  index: number;
+  selected: boolean;
+  onSelect: () => void;
+  hasError: boolean;
+}) {
   const { control } = useFormContext<CreatePatternFormValues>();
-  const [name, copies, text, terms] = useWatch({ control, name: [`pieces.${index}.name`, `pieces.${index}.copies`, `pieces.${index}.instructions`, 'terms'] });
+  const [name, copies, text, terms] = useWatch({
+    control,
+    name: [`pieces.${index}.name`, `pieces.${index}.copies`, `pieces.${index}.instructions`, 'terms'],
+  });
   const deferred = useDeferredValue(text ?? '');
-  const problems = useMemo(() => checkPiece(deferred, { terms: (terms ?? 'us') as Terms }).rounds.reduce((n, r) => n + r.problems.length, 0), [deferred, terms]);
+  const problems = useMemo(
+    () =>
+      checkPiece(deferred, { terms: (terms ?? 'us') as Terms }).rounds.reduce(
+        (n, r) => n + r.problems.length,
+        0,
+      ),
+    [deferred, terms],
+  );
   const flagged = problems > 0 || hasError;
   return (
     <button
@@ -37,7 +63,11 @@ function PieceTab({ index, selected, onSelect, hasError }: { index: number; sele
         <span className="inline-flex items-center gap-0.5 text-sm">
           <AlertTriangle aria-hidden className={cn('h-4 w-4', selected ? 'text-oat' : 'text-clay')} />
           <span className="sr-only">, needs a check</span>
-          {problems > 0 ? <span className="tabular" aria-hidden>{problems}</span> : null}
+          {problems > 0 ? (
+            <span className="tabular" aria-hidden>
+              {problems}
+            </span>
+          ) : null}
         </span>
       ) : null}
     </button>
@@ -65,14 +95,26 @@ export function PiecesEditor() {
   const e = errors?.[current];
 
   const yarnNames = yarns.map((y) => y?.name?.trim()).filter((n): n is string => Boolean(n));
-  const weight = yarns.find((y) => y?.name && pieceYarns.includes(y.name) && y.weight != null)?.weight ?? yarns.find((y) => y?.weight != null)?.weight ?? null;
-  const hookLabel = typeof hookMm === 'number' && Number.isFinite(hookMm) && hookMm >= 0.5 && hookMm <= 35 ? formatHook(hookMm) : null;
+  const weight =
+    yarns.find((y) => y?.name && pieceYarns.includes(y.name) && y.weight != null)?.weight ??
+    yarns.find((y) => y?.weight != null)?.weight ??
+    null;
+  const hookLabel =
+    typeof hookMm === 'number' && Number.isFinite(hookMm) && hookMm >= 0.5 && hookMm <= 35
+      ? formatHook(hookMm)
+      : null;
 
   return (
     <div className="flex flex-col gap-4">
       <div role="tablist" aria-label="Pieces" className="flex flex-wrap gap-2">
         {pieces.fields.map((f, i) => (
-          <PieceTab key={f.key} index={i} selected={i === current} onSelect={() => setSelected(i)} hasError={Boolean(errors?.[i])} />
+          <PieceTab
+            key={f.key}
+            index={i}
+            selected={i === current}
+            onSelect={() => setSelected(i)}
+            hasError={Boolean(errors?.[i])}
+          />
         ))}
         <Button
           variant="quiet"
@@ -94,7 +136,12 @@ export function PiecesEditor() {
         i === current ? (
           <div key={f.key} role="tabpanel" aria-label={`Piece ${i + 1}`} className="flex flex-col gap-4">
             <div className="grid gap-4 sm:grid-cols-[2fr_1fr_1.4fr]">
-              <TextField label="Piece name" placeholder="Body, Ear, Arm…" error={e?.name?.message} {...register(`pieces.${i}.name`)} />
+              <TextField
+                label="Piece name"
+                placeholder="Body, Ear, Arm…"
+                error={e?.name?.message}
+                {...register(`pieces.${i}.name`)}
+              />
               <TextField
                 label="How many to make"
                 type="number"
@@ -102,7 +149,9 @@ export function PiecesEditor() {
                 min={1}
                 hint="Make 2 for a pair of ears."
                 error={e?.copies?.message}
-                {...register(`pieces.${i}.copies`, { setValueAs: (v) => (v === '' ? Number.NaN : Number(v)) })}
+                {...register(`pieces.${i}.copies`, {
+                  setValueAs: (v) => (v === '' ? Number.NaN : Number(v)),
+                })}
               />
               <div className="flex flex-col gap-1.5">
                 <TextField
@@ -117,7 +166,9 @@ export function PiecesEditor() {
                   {...register(`pieces.${i}.hookMm`, { setValueAs: numberOrNull })}
                 />
                 <p className="text-sm font-semibold" aria-live="polite" data-testid="hook-label">
-                  {hookLabel ?? <span className="font-normal text-ink/70 dark:text-oat/70">US size shows here</span>}
+                  {hookLabel ?? (
+                    <span className="font-normal text-ink/70 dark:text-oat/70">US size shows here</span>
+                  )}
                 </p>
               </div>
             </div>
@@ -128,44 +179,59 @@ export function PiecesEditor() {
                 <div className="flex flex-wrap gap-x-5">
                   {yarnNames.map((n) => (
                     <label key={n} className="flex min-h-tap cursor-pointer items-center gap-2">
-                      <input type="checkbox" value={n} className="h-6 w-6 accent-moss" {...register(`pieces.${i}.yarns`)} />
+                      <input
+                        type="checkbox"
+                        value={n}
+                        className="h-6 w-6 accent-moss"
+                        {...register(`pieces.${i}.yarns`)}
+                      />
                       {n}
                     </label>
                   ))}
                 </div>
               ) : (
-                <p className="text-sm text-ink/70 dark:text-oat/70">Add yarns under Materials below, then tick the ones this piece uses.</p>
+                <p className="text-sm text-ink/70 dark:text-oat/70">
+                  Add yarns under Materials below, then tick the ones this piece uses.
+                </p>
               )}
             </fieldset>
 
             <PieceWorkspace index={i} weight={weight} />
 
-            <div className="flex flex-wrap gap-2 border-t border-wool pt-3 dark:border-[#4a423c]">
-              <Button variant="secondary" disabled={i === 0} onClick={() => {
-                  pieces.move(i, i - 1);
-                  setSelected(i - 1);
-                }}>
-                <ArrowUp aria-hidden className="h-5 w-5" /> Move earlier
-              </Button>
-              <Button variant="secondary" disabled={i === pieces.fields.length - 1} onClick={() => {
-                  pieces.move(i, i + 1);
-                  setSelected(i + 1);
-                }}>
-                <ArrowDown aria-hidden className="h-5 w-5" /> Move later
-              </Button>
-              <Button
-                variant="quiet"
-                className="ml-auto text-clay"
-                disabled={pieces.fields.length === 1}
-                title={pieces.fields.length === 1 ? 'A pattern keeps at least one piece.' : undefined}
-                onClick={() => {
-                  pieces.remove(i);
-                  setSelected(Math.max(0, i - 1));
-                }}
-              >
-                <Trash2 aria-hidden className="h-5 w-5" /> Remove this piece
-              </Button>
-            </div>
+            {pieces.fields.length > 1 ? (
+              <div className="flex flex-wrap gap-2 border-t border-wool pt-3 dark:border-[#4a423c]">
+                <Button
+                  variant="secondary"
+                  disabled={i === 0}
+                  onClick={() => {
+                    pieces.move(i, i - 1);
+                    setSelected(i - 1);
+                  }}
+                >
+                  <ArrowUp aria-hidden className="h-5 w-5" /> Move earlier
+                </Button>
+                <Button
+                  variant="secondary"
+                  disabled={i === pieces.fields.length - 1}
+                  onClick={() => {
+                    pieces.move(i, i + 1);
+                    setSelected(i + 1);
+                  }}
+                >
+                  <ArrowDown aria-hidden className="h-5 w-5" /> Move later
+                </Button>
+                <Button
+                  variant="quiet"
+                  className="ml-auto text-clay"
+                  onClick={() => {
+                    pieces.remove(i);
+                    setSelected(Math.max(0, i - 1));
+                  }}
+                >
+                  <Trash2 aria-hidden className="h-5 w-5" /> Remove this piece
+                </Button>
+              </div>
+            ) : null}
           </div>
         ) : null,
       )}

@@ -1,5 +1,15 @@
 import type { ReactNode } from 'react';
-import { AlertTriangle, CheckCircle2, Cloud, Info, MapPin, Palette, RefreshCw, Scissors, StickyNote } from 'lucide-react';
+import {
+  AlertTriangle,
+  CheckCircle2,
+  Cloud,
+  Info,
+  MapPin,
+  Palette,
+  RefreshCw,
+  Scissors,
+  StickyNote,
+} from 'lucide-react';
 import type { Note, NoteKind, PieceCheck, Problem, Round } from '@/engine/types';
 import { cn } from '@/utils/cn';
 
@@ -38,9 +48,21 @@ export function tableItems(check: PieceCheck, start = 0): TableItem[] {
     if (last && last.line === r.line) {
       last.count += 1;
       last.stitches = r.stitches;
-      for (const p of r.problems) if (!last.problems.some((q) => q.message === p.message)) last.problems.push(p);
+      for (const p of r.problems)
+        if (!last.problems.some((q) => q.message === p.message)) last.problems.push(p);
     } else {
-      rows.push({ kind: 'round', line: r.line, label: r.label, count: 1, first: r, stitches: r.stitches, worked: r.worked, previous, stated: r.stated, problems: [...r.problems] });
+      rows.push({
+        kind: 'round',
+        line: r.line,
+        label: r.label,
+        count: 1,
+        first: r,
+        stitches: r.stitches,
+        worked: r.worked,
+        previous,
+        stated: r.stated,
+        problems: [...r.problems],
+      });
     }
     previous = r.stitches;
   }
@@ -52,7 +74,17 @@ export function tableItems(check: PieceCheck, start = 0): TableItem[] {
  * The round table: what every round makes, what it works into, what the pattern says, and each problem in
  * plain words at its line. Clicking a round or a problem takes the caret there in the instructions.
  */
-export function RoundTable({ check, start = 0, onJump, className }: { check: PieceCheck; start?: number; onJump?: (line: number, column: number | null) => void; className?: string }) {
+export function RoundTable({
+  check,
+  start = 0,
+  onJump,
+  className,
+}: {
+  check: PieceCheck;
+  start?: number;
+  onJump?: (line: number, column: number | null) => void;
+  className?: string;
+}) {
   const items = tableItems(check, start);
   const roundRows = items.filter((i): i is TableRow => i.kind === 'round');
   const problemCount = roundRows.reduce((n, r) => n + r.problems.length, 0);
@@ -77,7 +109,10 @@ export function RoundTable({ check, start = 0, onJump, className }: { check: Pie
       </div>
 
       {check.hints.length ? (
-        <ul className="flex flex-col gap-1 rounded-soft bg-wool px-4 py-2 text-sm text-ink" aria-label="Hints">
+        <ul
+          className="flex flex-col gap-1 rounded-soft bg-wool px-4 py-2 text-sm text-ink"
+          aria-label="Hints"
+        >
           {check.hints.map((h) => (
             <li key={h} className="flex items-start gap-2">
               <Info aria-hidden className="mt-0.5 h-4 w-4 shrink-0" />
@@ -92,17 +127,28 @@ export function RoundTable({ check, start = 0, onJump, className }: { check: Pie
 
       {items.length === 0 ? (
         <p className="rounded-soft border-2 border-dashed border-wool px-4 py-6 text-center text-sm text-ink/70 dark:border-[#4a423c] dark:text-oat/70">
-          Type a round, e.g. <code className="font-semibold">Rnd 1: 6 sc in MR (6)</code>, and its count appears here.
+          Type a round, e.g. <code className="font-semibold">Rnd 1: 6 sc in MR (6)</code>, and its count
+          appears here.
         </p>
       ) : (
         <table className="w-full border-separate border-spacing-0 text-sm">
           <thead>
             <tr className="text-left text-xs uppercase tracking-wide text-ink/70 dark:text-oat/70">
-              <th scope="col" className="py-1 pr-2 font-semibold">Round</th>
-              <th scope="col" className="px-1 py-1 text-right font-semibold">Makes</th>
-              <th scope="col" className="px-1 py-1 text-right font-semibold">Works</th>
-              <th scope="col" className="px-1 py-1 text-right font-semibold">Stated</th>
-              <th scope="col" className="py-1 pl-2 font-semibold"><span className="sr-only">Status</span></th>
+              <th scope="col" className="py-1 pr-2 font-semibold">
+                Round
+              </th>
+              <th scope="col" className="px-1 py-1 text-right font-semibold">
+                Makes
+              </th>
+              <th scope="col" className="px-1 py-1 text-right font-semibold">
+                Works
+              </th>
+              <th scope="col" className="px-1 py-1 text-right font-semibold">
+                Stated
+              </th>
+              <th scope="col" className="py-1 pl-2 font-semibold">
+                <span className="sr-only">Status</span>
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -133,9 +179,16 @@ function NoteRow({ note, onJump }: { note: Note; onJump?: (line: number, column:
   );
   return (
     <tr data-line={note.line}>
-      <td colSpan={5} className="border-t border-wool py-1.5 text-ink/80 italic dark:border-[#4a423c] dark:text-oat/80">
+      <td
+        colSpan={5}
+        className="border-t border-wool py-1.5 text-ink/80 italic dark:border-[#4a423c] dark:text-oat/80"
+      >
         {onJump ? (
-          <button type="button" onClick={() => onJump(note.line, null)} className="w-full text-left hover:underline">
+          <button
+            type="button"
+            onClick={() => onJump(note.line, null)}
+            className="w-full text-left hover:underline"
+          >
             {body}
           </button>
         ) : (
@@ -146,21 +199,41 @@ function NoteRow({ note, onJump }: { note: Note; onJump?: (line: number, column:
   );
 }
 
-function RoundRows({ row, onJump }: { row: TableRow; onJump?: (line: number, column: number | null) => void }) {
+function RoundRows({
+  row,
+  onJump,
+}: {
+  row: TableRow;
+  onJump?: (line: number, column: number | null) => void;
+}) {
   const flagged = row.problems.length > 0;
-  const cell = cn('border-t border-wool py-2 align-middle dark:border-[#4a423c]', flagged && 'bg-[#f3dccf]/60 dark:bg-clay/15');
+  const cell = cn(
+    'border-t border-wool py-2 align-middle dark:border-[#4a423c]',
+    flagged && 'bg-[#f3dccf]/60 dark:bg-clay/15',
+  );
   const label = (
     <>
       <span className="font-semibold">{row.label}</span>
-      {row.count > 1 ? <span className="ml-1 text-xs text-ink/70 dark:text-oat/70">({row.count} rounds)</span> : null}
+      {row.count > 1 ? (
+        <span className="ml-1 text-xs text-ink/70 dark:text-oat/70">({row.count} rounds)</span>
+      ) : null}
     </>
   );
   return (
     <>
-      <tr data-line={row.line} data-problems={row.problems.length} aria-label={`${row.label}${flagged ? ', check' : ''}`}>
+      <tr
+        data-line={row.line}
+        data-problems={row.problems.length}
+        aria-label={`${row.label}${flagged ? ', check' : ''}`}
+      >
         <td className={cn(cell, 'pr-2')}>
           {onJump ? (
-            <button type="button" className="min-h-8 text-left hover:underline" onClick={() => onJump(row.line, null)} title={`Go to line ${row.line + 1}`}>
+            <button
+              type="button"
+              className="min-h-8 text-left hover:underline"
+              onClick={() => onJump(row.line, null)}
+              title={`Go to line ${row.line + 1}`}
+            >
               {label}
             </button>
           ) : (
@@ -169,9 +242,15 @@ function RoundRows({ row, onJump }: { row: TableRow; onJump?: (line: number, col
         </td>
         <td className={cn(cell, 'tabular px-1 text-right font-semibold')}>{row.stitches}</td>
         <td className={cn(cell, 'tabular px-1 text-right')}>
-          {row.previous === 0 && row.worked === 0 ? <span aria-label="nothing before it">—</span> : `${row.worked} of ${row.previous}`}
+          {row.previous === 0 && row.worked === 0 ? (
+            <span aria-label="nothing before it">—</span>
+          ) : (
+            `${row.worked} of ${row.previous}`
+          )}
         </td>
-        <td className={cn(cell, 'tabular px-1 text-right')}>{row.stated ?? <span aria-label="not stated">—</span>}</td>
+        <td className={cn(cell, 'tabular px-1 text-right')}>
+          {row.stated ?? <span aria-label="not stated">—</span>}
+        </td>
         <td className={cn(cell, 'pl-2')}>
           {flagged ? (
             <span className="inline-flex items-center gap-1 font-bold text-clay">
