@@ -60,14 +60,15 @@ export function YarnTable({ yarns, onEdit, onDelete }: { yarns: ShelfYarn[]; onE
           </span>
         ),
       }),
-      col.accessor((y) => y.weight ?? -1, {
+      col.accessor((y) => y.weight ?? undefined, {
         id: 'weight',
+        sortUndefined: 'last',
         header: 'Weight',
         cell: (c) => (c.row.original.weight != null ? yarnWeightLabel(c.row.original.weight) : (c.row.original.ply ?? '—')),
       }),
-      col.accessor((y) => y.metersPerSkein ?? (y.yardsPerSkein ? y.yardsPerSkein * 0.9144 : -1), { id: 'perSkein', header: 'Per skein', cell: (c) => <span className="tabular">{perSkein(c.row.original)}</span> }),
+      col.accessor((y) => y.metersPerSkein ?? (y.yardsPerSkein ? y.yardsPerSkein * 0.9144 : undefined), { id: 'perSkein', sortUndefined: 'last', header: 'Per skein', cell: (c) => <span className="tabular">{perSkein(c.row.original)}</span> }),
       col.accessor('skeinsOwned', { header: 'Skeins', cell: (c) => <span className="tabular">{fmtSkeins(c.getValue())}</span> }),
-      col.accessor((y) => y.metersLeft ?? -1, { id: 'left', header: 'Left', cell: (c) => <Left y={c.row.original} /> }),
+      col.accessor((y) => y.metersLeft ?? undefined, { id: 'left', sortUndefined: 'last', header: 'Left', cell: (c) => <Left y={c.row.original} /> }),
     ],
     [],
   );
@@ -77,6 +78,7 @@ export function YarnTable({ yarns, onEdit, onDelete }: { yarns: ShelfYarn[]; onE
     state: { sorting, globalFilter: filter },
     onSortingChange: setSorting,
     onGlobalFilterChange: setFilter,
+    // Yarns with no known length sort last either way (sortUndefined above).
     // Find a yarn by any of its words: name, colour, fibre, ply or notes.
     globalFilterFn: (row, _id, value: string) => {
       const y = row.original;
