@@ -1,7 +1,6 @@
 import { useEffect } from 'react';
 import { Link } from 'react-router-dom';
 import { PartyPopper, Image as ImageIcon } from 'lucide-react';
-import { Card } from '@/components/ui/card';
 import type { MakerProfile } from '../types';
 import { formatDay, plural } from '../format';
 
@@ -19,7 +18,7 @@ export function MakerProfileView({ profile }: { profile: MakerProfile }) {
         {profile.projects.map((p) => (
           <li key={p.url}>
             <Link to={p.url} className="block rounded-blob focus-visible:outline-clay">
-              <Card className="overflow-hidden p-0 transition hover:ring-moss">
+              <div className="overflow-hidden rounded-blob bg-white/80 shadow-sm ring-1 ring-wool transition hover:ring-moss dark:bg-[#332e2a] dark:ring-[#4a423c]">
                 {p.cover ? (
                   <img src={p.cover.url} alt={p.cover.alt} className="aspect-[4/3] w-full object-cover" loading="lazy" />
                 ) : (
@@ -38,7 +37,7 @@ export function MakerProfileView({ profile }: { profile: MakerProfile }) {
                     </span>
                   </p>
                 </div>
-              </Card>
+              </div>
             </Link>
           </li>
         ))}

@@ -16,7 +16,7 @@ export function PhotoGallery({ photos, title }: { photos: ShowcasePhoto[]; title
       <button
         type="button"
         onClick={() => setOpen(0)}
-        className="group relative block w-full overflow-hidden rounded-blob bg-wool dark:bg-[#3a3430]"
+        className="group relative block w-full overflow-hidden rounded-blob bg-wool dark:bg-[#3a3430] print:bg-transparent"
         aria-label={`Enlarge the cover photo: ${cover.alt}`}
       >
         <img
@@ -24,7 +24,7 @@ export function PhotoGallery({ photos, title }: { photos: ShowcasePhoto[]; title
           alt={cover.alt}
           width={cover.width}
           height={cover.height}
-          className="mx-auto max-h-[70vh] w-full object-cover print:max-h-[9cm] print:w-auto print:object-contain"
+          className="mx-auto max-h-[70vh] w-full object-cover print:max-h-[9cm] print:w-auto print:rounded-soft print:object-contain"
           style={{ aspectRatio: `${cover.width} / ${cover.height}` }}
         />
         <span className="absolute bottom-3 right-3 flex items-center gap-1.5 rounded-soft bg-ink/70 px-3 py-1.5 text-sm font-semibold text-oat print:hidden">

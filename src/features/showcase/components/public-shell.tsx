@@ -8,7 +8,7 @@ import { useTheme } from '@/hooks/use-theme';
 export function PublicShell({ children, action }: { children: ReactNode; action?: ReactNode }) {
   const { theme, toggle } = useTheme();
   return (
-    <div className="min-h-dvh">
+    <div className="min-h-dvh bg-oat text-ink dark:bg-ink dark:text-oat print:bg-white">
       <header className="print:hidden">
         <div className="mx-auto flex max-w-3xl items-center gap-2 px-4 py-2">
           <Link to="/" className="flex min-h-tap items-center gap-2 text-lg font-bold" aria-label="Whorlbook">

@@ -132,10 +132,12 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
                   </Button>
                 </div>
 
-                <div className="flex flex-wrap items-center gap-4 rounded-soft bg-oat p-3 dark:bg-ink/60">
-                  {qr ? <img src={qr} alt="QR code of the link" className="h-32 w-32 rounded-md bg-white p-1" data-testid="share-qr" /> : <div className="h-32 w-32 animate-pulse rounded-md bg-wool" />}
-                  <div className="flex-1 space-y-2">
+                <div className="space-y-3 rounded-soft bg-oat p-3 dark:bg-ink/60">
+                  <div className="flex items-center gap-4">
+                    {qr ? <img src={qr} alt="QR code of the link" className="h-28 w-28 shrink-0 rounded-md bg-white p-1" data-testid="share-qr" /> : <div className="h-28 w-28 shrink-0 animate-pulse rounded-md bg-wool" />}
                     <p className="text-sm">For a craft-fair table: people scan the code to see the photos and how it was made.</p>
+                  </div>
+                  <div>
                     <div className="flex flex-wrap gap-2">
                       <a href={`${share.sharePath ?? ''}?print=card`} target="_blank" rel="noopener" className="inline-flex min-h-tap items-center gap-2 rounded-soft bg-wool px-4 font-semibold text-ink hover:bg-[#d9ccb4] dark:bg-[#3a3430] dark:text-oat">
                         <Printer aria-hidden className="h-5 w-5" /> Print table card
@@ -152,7 +154,7 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
             ) : null}
 
             <p className="mt-4 text-sm text-ink/70 dark:text-oat/70">
-              The page shows photos, materials, pieces and placements. From the journal it shows only the entries you mark “Show on the showcase”
+              The page shows photos, materials, pieces and placements. From the journal it shows only the entries you tick “Show this entry when I share the project”
               {share.shownEntryCount ? ` (${share.shownEntryCount} marked now)` : ' (none marked yet)'}; marked entries tagged as a change appear under “Changes from the pattern”. Your e-mail address, notes and who it is for never appear.
             </p>
 

@@ -3,7 +3,7 @@ import Markdown from 'react-markdown';
 import { ExternalLink } from 'lucide-react';
 import { Card } from '@/components/ui/card';
 import type { Showcase } from '../types';
-import { formatDay, formatMinutes, plural } from '../format';
+import { formatDay, formatMinutes } from '../format';
 
 export function Section({ title, children, id, className }: { title: string; children: ReactNode; id?: string; className?: string }) {
   return (
@@ -187,7 +187,6 @@ export function Facts({ showcase }: { showcase: Showcase }) {
   if (showcase.startedOn) items.push(['Started', formatDay(showcase.startedOn)]);
   if (showcase.finishedOn) items.push(['Finished', formatDay(showcase.finishedOn)]);
   if (time) items.push(['Working time', time]);
-  if (showcase.pieces.length) items.push(['Pieces', plural(showcase.pieces.reduce((n, p) => n + p.copies, 0), 'piece')]);
   return (
     <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4 print:flex print:flex-wrap print:gap-x-6 print:gap-y-1">
       {items.map(([k, v]) => (

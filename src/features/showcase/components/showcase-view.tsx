@@ -119,9 +119,12 @@ export function ShowcaseView({ showcase, autoPrint, onAutoPrinted }: { showcase:
             </Link>
           ) : null}
         </footer>
-        <p className="hidden text-center text-xs print:block">
-          {showcase.url} · shared from Whorlbook
-        </p>
+        <div className="hidden items-center gap-3 border-t border-ink/20 pt-2 text-xs print:flex print:break-inside-avoid">
+          {qr ? <img src={qr} alt="" className="h-[2.2cm] w-[2.2cm]" /> : null}
+          <p>
+            Scan or visit <span className="break-all font-semibold">{showcase.url}</span> for the photos and comments. Shared from Whorlbook.
+          </p>
+        </div>
       </div>
       <TableCard showcase={showcase} qr={qr} />
       {reporting ? <ReportDialog target={{ shareToken: token }} onClose={() => setReporting(false)} /> : null}
