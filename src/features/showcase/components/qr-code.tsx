@@ -7,6 +7,8 @@ import { cn } from '@/utils/cn';
  * code can be damaged and still read — ISO/IEC 18004) survives a creased card on a fair table; ink on white
  * because scanners need the contrast, whatever the theme. (Recovery figure from memory.)
  */
+export const QR_OPTIONS = { errorCorrectionLevel: 'M', margin: 2, width: 512, color: { dark: '#2A2622', light: '#FFFFFF' } } as const;
+
 export function useQrDataUrl(text: string | null | undefined) {
   const [url, setUrl] = useState<string | null>(null);
   useEffect(() => {
@@ -15,7 +17,7 @@ export function useQrDataUrl(text: string | null | undefined) {
       setUrl(null);
       return;
     }
-    QRCode.toDataURL(text, { errorCorrectionLevel: 'M', margin: 2, width: 512, color: { dark: '#2A2622', light: '#FFFFFF' } }).then(
+    QRCode.toDataURL(text, QR_OPTIONS).then(
       (u) => live && setUrl(u),
       () => live && setUrl(null),
     );
