@@ -71,7 +71,8 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
               <legend className="mb-2 font-semibold">Who can see the page</legend>
               <div className="grid gap-2">
                 {choices.map((c) => {
-                  const on = share.visibility === c.value;
+                  // The choice shows at once while the change is on its way; a refusal puts the old one back.
+                  const on = (setVisibility.isPending ? setVisibility.variables : share.visibility) === c.value;
                   const Icon = c.icon;
                   return (
                     <label
