@@ -17,7 +17,12 @@ export interface PieceTotals {
 export function pieceTotals(check: PieceCheck): PieceTotals {
   let errors = 0;
   let warnings = 0;
-  for (const r of check.rounds) for (const p of r.problems) p.severity === 'error' ? errors++ : warnings++;
+  for (const r of check.rounds) {
+    for (const p of r.problems) {
+      if (p.severity === 'error') errors++;
+      else warnings++;
+    }
+  }
   const last = check.rounds[check.rounds.length - 1];
   return {
     rounds: check.rounds.length,

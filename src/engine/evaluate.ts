@@ -306,29 +306,44 @@ class Walker {
     }
   }
 
+  /** Where a stitch goes, in words. */
+  where(n: StNode): string {
+    switch (n.into.t) {
+      case 'same':
+        return 'in the same stitch';
+      case 'ring':
+        return this.ringKind === 'mr' ? 'in the magic ring' : 'in the ring';
+      case 'fromHook':
+        return `in the ${ordinal(n.into.nth)} ch from the hook`;
+      case 'space':
+        return n.into.size > 1 ? `in the next ch-${n.into.size} space` : 'in the next space';
+      default:
+        if (this.base === 'ring') return this.ringKind === 'mr' ? 'in the magic ring' : 'in the ring';
+        return `in the next ${this.noun()}`;
+    }
+  }
+
+  // The words for a stitch node depend only on the node and where the round works into; a repeat
+  // asks for them thousands of times, so they are kept.
+  private said = new Map<StNode, { key: string; action: string; text: string }>();
+
   describe(n: StNode, makes: number): { action: string; text: string } {
+    const key = this.base + this.ringKind;
+    const hit = this.said.get(n);
+    if (hit && hit.key === key) return hit;
+    const d = this.describeFresh(n, makes);
+    this.said.set(n, { key, action: d.action, text: d.text });
+    return d;
+  }
+
+  describeFresh(n: StNode, makes: number): { action: string; text: string } {
     const e = n.entry;
     const a = n.incOf ? this.abbr(n.incOf) : this.abbr(e);
     const noun = this.noun();
-    const where = (): string => {
-      switch (n.into.t) {
-        case 'same':
-          return 'in the same stitch';
-        case 'ring':
-          return this.ringKind === 'mr' ? 'in the magic ring' : 'in the ring';
-        case 'fromHook':
-          return `in the ${ordinal(n.into.nth)} ch from the hook`;
-        case 'space':
-          return n.into.size > 1 ? `in the next ch-${n.into.size} space` : 'in the next space';
-        default:
-          if (this.base === 'ring') return this.ringKind === 'mr' ? 'in the magic ring' : 'in the ring';
-          return `in the next ${noun}`;
-      }
-    };
     if (e.kind === 'inc') {
       const base = n.incOf ? this.abbr(n.incOf) : this.abbr(STITCH_BY_ID.get('sc')!);
       const action = n.incOf ? `${this.abbrUs(n.incOf)} inc` : 'inc';
-      return { action, text: `${n.incOf ? `${base} inc` : 'inc'}: 2 ${base} ${where()}` };
+      return { action, text: `${n.incOf ? `${base} inc` : 'inc'}: 2 ${base} ${this.where(n)}` };
     }
     if (e.kind === 'dec') {
       const over = e.works;
@@ -338,9 +353,16 @@ class Walker {
       const baseAbbr = base ? this.abbr(base) : this.abbr(e);
       return { action: e.id, text: `${this.abbr(e)}: ${baseAbbr} the next ${over} ${noun === 'chain' ? 'chains' : 'stitches'} together` };
     }
-    if (n.per > 1) return { action: `${n.per} ${this.abbrUs(e)}`, text: `${n.per} ${a} ${where()}` };
+    if (n.per > 1) return { action: `${n.per} ${this.abbrUs(e)}`, text: `${n.per} ${a} ${this.where(n)}` };
     if (makes === 0) return { action: e.id, text: `${a} (not counted as a stitch)` };
-    return { action: e.id, text: `${a} ${where()}` };
+    return { action: e.id, text: `${a} ${this.where(n)}` };
+  }
+
+  iteration(g: GroupNode, loop: Loop | null, index: number, of: number, keep: { index: number; of: number } | null, infos: Array<{ index: number; of: number }>): void {
+    const info = { index, of };
+    infos.push(info);
+    this.repeat = keep ?? (g.times.k === 'n' && g.times.n === 1 && !g.star ? this.repeat : info);
+    this.run(g.body, loop);
   }
 
   abbrUs(e: StitchEntry): string {
@@ -393,23 +415,19 @@ class Walker {
     }
     const outer = this.repeat;
     const infos: Array<{ index: number; of: number }> = [];
-    const once = (index: number, of: number) => {
-      const info = { index, of };
-      infos.push(info);
-      this.repeat = g.times.k === 'n' && g.times.n === 1 && !g.star ? outer : info;
-      this.run(g.body, loop);
-    };
+    // A plain group "(sc, inc), sc" is not a repeat: its steps keep the repeat they sit in.
+    const plain = g.times.k === 'n' && g.times.n === 1 && !g.star;
     try {
       if (g.times.k === 'n' || g.times.k === 'alt') {
         const times = g.times.k === 'n' ? g.times.n : g.times.options[this.choice(g.times.id)] ?? g.times.options[0];
-        for (let i = 1; i <= times; i++) once(i, times);
+        for (let i = 1; i <= times; i++) this.iteration(g, loop, i, times, plain ? outer : null, infos);
         return;
       }
       // Fill: as many times as the stitches left allow, keeping `leave` for the instructions after.
       const leave = g.times.leave;
       const start = this.pos;
       const rem0 = this.remaining() - leave;
-      once(1, 1);
+      this.iteration(g, loop, 1, 1, null, infos);
       const w = this.pos - start;
       if (w <= 0) {
         this.problems.push(error('This repeat works no stitches, so it cannot fill the round', g.col));
@@ -430,7 +448,7 @@ class Walker {
         this.fitFailed = true;
         this.clean = false;
       }
-      for (let i = 2; i <= extra + 1; i++) once(i, extra + 1);
+      for (let i = 2; i <= extra + 1; i++) this.iteration(g, loop, i, extra + 1, null, infos);
       for (const info of infos) info.of = extra + 1;
     } finally {
       this.repeat = outer;
@@ -438,31 +456,36 @@ class Walker {
   }
 }
 
-/** Stitches made by a group worked into one stitch, "(sc, ch 2, sc)". */
-function collect(nodes: Node[]): { makes: number; made: Record<string, number> } {
-  const made: Record<string, number> = {};
-  let makes = 0;
-  const add = (k: string, n: number) => {
-    made[k] = (made[k] ?? 0) + n;
-    makes += n;
-  };
-  const visit = (ns: Node[], mul: number) => {
-    for (const n of ns) {
-      if (n.t === 'st') {
-        const units = n.units.u === 'n' ? n.units.n : 1;
-        if (n.entry.id === 'ch') {
-          if (n.role === 'turning') continue;
-          add('ch', units * mul);
-        } else if (n.entry.kind === 'inc') add(n.incOf ? n.incOf.madeAs : 'sc', 2 * units * mul);
-        else add(n.entry.madeAs, n.per * n.entry.makes * units * mul);
-      } else if (n.t === 'group') {
-        const t = n.times.k === 'n' ? n.times.n : n.times.k === 'alt' ? n.times.options[0] : 1;
-        visit(n.body, mul * t * (n.into && n.units.u === 'n' ? n.units.n : 1));
+function collectInto(ns: Node[], mul: number, out: { makes: number; made: Record<string, number> }): void {
+  for (const n of ns) {
+    if (n.t === 'st') {
+      const units = n.units.u === 'n' ? n.units.n : 1;
+      let key: string;
+      let count: number;
+      if (n.entry.id === 'ch') {
+        if (n.role === 'turning') continue;
+        key = 'ch';
+        count = units * mul;
+      } else if (n.entry.kind === 'inc') {
+        key = n.incOf ? n.incOf.madeAs : 'sc';
+        count = 2 * units * mul;
+      } else {
+        key = n.entry.madeAs;
+        count = n.per * n.entry.makes * units * mul;
       }
+      out.made[key] = (out.made[key] ?? 0) + count;
+      out.makes += count;
+    } else if (n.t === 'group') {
+      const t = n.times.k === 'n' ? n.times.n : n.times.k === 'alt' ? n.times.options[0] : 1;
+      collectInto(n.body, mul * t * (n.into && n.units.u === 'n' ? n.units.n : 1), out);
     }
-  };
-  visit(nodes, 1);
-  return { makes, made };
+  }
+}
+
+function collect(nodes: Node[]): { makes: number; made: Record<string, number> } {
+  const out = { makes: 0, made: {} as Record<string, number> };
+  collectInto(nodes, 1, out);
+  return out;
 }
 
 function runOnce(nodes: Node[], env: EvalEnv, choices: number[], initialLoop: Loop | null): Walker | null {

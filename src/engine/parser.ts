@@ -518,7 +518,7 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
   let pre: number | null = null;
   let loop: Loop | null = clauseLoop;
   let entry: StitchEntry | undefined;
-  let word = '';
+  let word: string;
   let incOf: StitchEntry | undefined;
   if (isNum(c.el) && !inherit) {
     pre = (c.el as Tok).n;
@@ -1301,8 +1301,11 @@ function settleChains(nodes: Node[], r: Reader, top: boolean): void {
     if (top && i === firstIdx) {
       if (hasFromHook) n.role = 'foundation';
       else if (!laterWork) n.role = 'chains';
-      else if (next && next.t === 'skip') n.role = 'chains';
       else if (count === 1) n.role = 'turning';
+      else if (next && next.t === 'skip') {
+        // "ch 4, sk 4, …" makes a gap of 4 chains; read as a turning chain when the count says so.
+        n.roleAlt = { id: r.alt(2), options: ['chains', 'turning'] };
+      }
       else {
         const options: ChainRole[] = count >= 3 ? ['counts', 'turning'] : ['turning', 'counts'];
         n.roleAlt = { id: r.alt(2), options };

@@ -42,7 +42,7 @@ export function planRound(from: number, to: number, opts: PlanOptions = {}): Pla
     );
   }
   let instruction: string;
-  if (to === from) instruction = `${from} sc`;
+  if (to === from) instruction = scRun(from);
   else {
     const increasing = to > from;
     const k = increasing ? to - from : from - to;

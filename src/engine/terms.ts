@@ -51,7 +51,10 @@ interface Table {
 
 function build(dir: 'us-uk' | 'uk-us'): Table {
   const words = new Map<string, string>();
-  for (const [us, uk] of WORDS) dir === 'us-uk' ? words.set(us, uk) : words.set(uk, us);
+  for (const [us, uk] of WORDS) {
+    if (dir === 'us-uk') words.set(us, uk);
+    else words.set(uk, us);
+  }
   const phrases: Array<[string[], string[]]> = PHRASES.map(([us, uk]) => (dir === 'us-uk' ? [us, uk] : [uk, us]));
   for (const k of KEEP) phrases.push([k, k]);
   phrases.sort((a, b) => b[0].length - a[0].length);
