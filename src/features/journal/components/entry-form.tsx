@@ -82,14 +82,29 @@ export function EntryForm({
         />
       </div>
       {pieces.length ? (
-        <SelectField label="Piece" error={errors.pieceId?.message} {...register('pieceId', { setValueAs: numberOrNull })}>
-          <option value="">The whole project</option>
-          {pieces.map((p) => (
-            <option key={p.id} value={p.id}>
-              {p.name}
-            </option>
-          ))}
-        </SelectField>
+        <Controller
+          control={control}
+          name="pieceId"
+          render={({ field }) => (
+            // Controlled: the select holds strings, the schema wants a piece id or null.
+            <SelectField
+              label="Piece"
+              error={errors.pieceId?.message}
+              ref={field.ref}
+              name={field.name}
+              onBlur={field.onBlur}
+              value={field.value == null ? '' : String(field.value)}
+              onChange={(e) => field.onChange(numberOrNull(e.target.value))}
+            >
+              <option value="">The whole project</option>
+              {pieces.map((p) => (
+                <option key={p.id} value={p.id}>
+                  {p.name}
+                </option>
+              ))}
+            </SelectField>
+          )}
+        />
       ) : null}
       <div className="flex flex-col gap-1.5">
         <p id={tagsLabel} className="font-semibold">
