@@ -51,12 +51,13 @@ export default function ProjectRoute() {
   const [confirming, setConfirming] = useState(false);
 
   if (project.isPending) return <Loading label="Opening the project…" />;
-  if (project.isError) {
-    const missing = project.error instanceof ApiError && (project.error.status === 404 || project.error.status === 422);
+  const missing = project.isError && project.error instanceof ApiError && (project.error.status === 404 || project.error.status === 422);
+  // A failed refresh keeps showing the copy already at hand (e.g. offline), unless the project is gone.
+  if (project.isError && (missing || !project.data)) {
     return (
       <div className="flex flex-col gap-4">
         <Banner tone="warning" title={missing ? 'That project could not be found' : 'The project did not load'}>
-          {missing ? 'It may have been deleted, or the link is wrong.' : project.error.message}
+          {missing ? 'It may have been deleted, or the link is wrong.' : project.error?.message}
         </Banner>
         <ButtonLink to={paths.projects} variant="secondary">
           Back to your projects
@@ -211,8 +212,8 @@ export default function ProjectRoute() {
             onSuccess: () => {
               setConfirming(false);
               toast.success(`Deleted “${p.title}”.`);
-              navigate(paths.projects, { replace: true });
-              qc.removeQueries({ queryKey: projectKeys.detail(id) });
+              // Drop the stored copy only once this page has gone, or it would ask the server for it again.
+              void Promise.resolve(navigate(paths.projects, { replace: true })).then(() => qc.removeQueries({ queryKey: projectKeys.detail(id) }));
             },
           })
         }

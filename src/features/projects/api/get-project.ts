@@ -6,7 +6,14 @@ import { projectKeys } from './keys';
 export const getProject = async (id: number, signal?: AbortSignal) => (await apiGet<{ project: Project }>(`/projects/${id}`, undefined, signal)).project;
 
 export const projectQueryOptions = (id: number) =>
-  // A missing project is said on the page itself, not in a toast.
-  queryOptions({ queryKey: projectKeys.detail(id), queryFn: ({ signal }) => getProject(id, signal), meta: { silent: true } });
+  queryOptions({
+    queryKey: projectKeys.detail(id),
+    queryFn: ({ signal }) => getProject(id, signal),
+    // The detail is kept across reloads (for the Tally offline), so a copy restored from there is shown at once
+    // and checked again with the server every time the page opens.
+    staleTime: 0,
+    // A missing project is said on the page itself, not in a toast.
+    meta: { silent: true },
+  });
 
 export const useProject = (id: number) => useQuery(projectQueryOptions(id));
