@@ -1,7 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Knex } from 'knex';
-import type { IncomingMessage } from 'node:http';
 
 /** Every file under the test's uploads folder (relative paths), to prove nothing was left behind. */
 export function filesUnder(dir: string): string[] {
@@ -15,7 +14,8 @@ export async function photoCount(db: Knex) {
 }
 
 /** supertest's binary parser for images, so res.body is a Buffer. */
-export function binary(res: IncomingMessage, cb: (err: Error | null, body: Buffer) => void) {
+// superagent hands the raw Node response here although its types say otherwise.
+export function binary(res: any, cb: (err: Error | null, body: Buffer) => void) {
   const chunks: Buffer[] = [];
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => cb(null, Buffer.concat(chunks)));
