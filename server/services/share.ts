@@ -285,6 +285,8 @@ export interface ShareStatus {
   visibility: 'private' | 'link' | 'public';
   sharePath: string | null;
   shareUrl: string | null;
+  /** The owner's public maker page, while this project is listed on it. */
+  profilePath: string | null;
   hiddenByAdmin: boolean;
   cheerCount: number;
   commentCount: number;
@@ -302,6 +304,7 @@ export async function shareStatus(db: Knex, userId: string, projectId: number, o
     visibility: row.visibility,
     sharePath: open ? sharePath(row.share_token) : null,
     shareUrl: open ? absoluteUrl(origin, sharePath(row.share_token)) : null,
+    profilePath: open && row.visibility === 'public' ? profilePath(row.owner_id) : null,
     hiddenByAdmin: Boolean(row.showcase_hidden_at),
     cheerCount: await count(db('cheers').where({ project_id: row.id })),
     commentCount: await count(db('comments').where({ project_id: row.id }).whereNull('hidden_at')),

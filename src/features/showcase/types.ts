@@ -76,6 +76,7 @@ export interface ShareStatus {
   visibility: 'private' | 'link' | 'public';
   sharePath: string | null;
   shareUrl: string | null;
+  profilePath: string | null;
   hiddenByAdmin: boolean;
   cheerCount: number;
   commentCount: number;

@@ -24,7 +24,7 @@ function renderPanel(onChanged = () => {}) {
   );
 }
 
-const base: ShareStatus = { visibility: 'private', sharePath: null, shareUrl: null, hiddenByAdmin: false, cheerCount: 0, commentCount: 0, hiddenCommentCount: 0, shownEntryCount: 1, photoCount: 2 };
+const base: ShareStatus = { visibility: 'private', sharePath: null, shareUrl: null, profilePath: null, hiddenByAdmin: false, cheerCount: 0, commentCount: 0, hiddenCommentCount: 0, shownEntryCount: 1, photoCount: 2 };
 
 function shared(token: string): ShareStatus {
   return { ...base, visibility: 'link', sharePath: `/p/${token}`, shareUrl: `http://127.0.0.1:3000/p/${token}` };

@@ -220,7 +220,7 @@ describe('sharing and retiring links (owner only)', () => {
     const p = await createShowcaseProject(t.db, user.id, { visibility: 'public' });
     const res = await agent.get(`/api/projects/${p.id}/share`);
     expect(res.status).toBe(200);
-    expect(res.body.share).toMatchObject({ visibility: 'public', sharePath: `/p/${p.token}`, hiddenByAdmin: false, cheerCount: 0, commentCount: 0, shownEntryCount: 2, photoCount: 3 });
+    expect(res.body.share).toMatchObject({ visibility: 'public', sharePath: `/p/${p.token}`, profilePath: `/m/${user.id}`, hiddenByAdmin: false, cheerCount: 0, commentCount: 0, shownEntryCount: 2, photoCount: 3 });
   });
 });
 

@@ -128,6 +128,11 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
                   <a href={share.sharePath ?? share.shareUrl} target="_blank" rel="noopener" className="inline-flex min-h-tap items-center gap-2 rounded-soft bg-wool px-5 font-semibold text-ink hover:bg-[#d9ccb4] dark:bg-[#3a3430] dark:text-oat">
                     <ExternalLink aria-hidden className="h-5 w-5" /> Open the page
                   </a>
+                  {share.profilePath ? (
+                    <a href={share.profilePath} target="_blank" rel="noopener" className="inline-flex min-h-tap items-center gap-2 rounded-soft px-3 font-semibold text-moss hover:bg-wool/60 dark:text-[#9cc3a8]">
+                      <Globe aria-hidden className="h-5 w-5" /> Your maker page
+                    </a>
+                  ) : null}
                   <Button variant="quiet" onClick={() => setConfirmNew(true)}>
                     <RefreshCw aria-hidden className="h-5 w-5" /> Make a new link
                   </Button>
