@@ -1,6 +1,4 @@
 import crypto from 'node:crypto';
-import fs from 'node:fs/promises';
-import path from 'node:path';
 import type { Knex } from 'knex';
 import type { AppContext } from '../context.js';
 import type { ProjectStatus } from '../../src/schemas/common.js';
@@ -12,7 +10,9 @@ import { checkPiece } from '../../src/engine/index.js';
 import type { Placement, PieceProgress, Project, ProjectPiece } from '../../src/types/api.js';
 import type { z } from 'zod';
 import { HttpError, notFound } from '../lib/http-error.js';
+import { deleteProjectPhotoFiles } from '../lib/storage.js';
 import { ownedProject } from './ownership.js';
+import { photoOut, type PhotoRow } from './photos.js';
 
 type CreateInput = z.output<typeof CreateProjectSchema>;
 type UpdateInput = z.output<typeof UpdateProjectSchema>;
@@ -112,6 +112,7 @@ async function serializeProject(ctx: AppContext, row: Row): Promise<Project> {
   const placementRows: Row[] = ids.length ? await db('placements').whereIn('piece_id', ids).orderBy([{ column: 'created_at' }, { column: 'id' }]) : [];
   const progressBy = new Map(progressRows.map((p) => [p.piece_id, p]));
   const materials = readMaterials(row.materials);
+  const cover: PhotoRow | undefined = row.cover_photo_id ? await db('photos').where({ id: row.cover_photo_id, project_id: row.id }).first() : undefined;
 
   const pieces: ProjectPiece[] = pieceRows.map((p) => {
     const pr = progressBy.get(p.id);
@@ -148,8 +149,7 @@ async function serializeProject(ctx: AppContext, row: Row): Promise<Project> {
     notes: row.notes ?? null,
     visibility: row.visibility,
     shareUrl: shareUrl(ctx.env, row),
-    // The photo URLs belong to the photos work (issue 7); until it serves them there is no cover to show.
-    coverPhoto: null,
+    coverPhoto: cover ? photoOut(cover) : null,
     pieces,
     cautions: cautionsFor({ forYoungChild: Boolean(row.for_young_child), notions: materials.notions }),
     createdAt: row.created_at,
@@ -324,24 +324,9 @@ async function replacePieces(trx: Knex.Transaction, projectId: number, pieces: N
  * Files go only after the rows are gone, so a failed delete never leaves rows pointing at missing files.
  */
 export async function deleteProject(ctx: AppContext, userId: string, projectId: number) {
-  const keys = await ctx.db.transaction(async (trx) => {
+  await ctx.db.transaction(async (trx) => {
     const row = await ownedProject(trx, userId, projectId);
-    const storageKeys: string[] = await trx('photos').where({ project_id: row.id }).pluck('storage_key');
     await trx('projects').where({ id: row.id }).delete();
-    return storageKeys;
   });
-  await deletePhotoFiles(ctx, keys);
-}
-
-// The photos work (issue 7) owns server/lib/storage.ts; it had no project-level delete when this was written,
-// so the two files each photo keeps (display and thumbnail) are removed here by their server-made keys.
-async function deletePhotoFiles(ctx: AppContext, keys: string[]) {
-  const root = path.resolve(ctx.env.uploadsDir);
-  for (const key of keys) {
-    for (const suffix of ['-display.jpg', '-thumb.jpg']) {
-      const file = path.resolve(root, `${key}${suffix}`);
-      if (!file.startsWith(root + path.sep)) continue; // keys are server-made; never follow one out of the folder
-      await fs.rm(file, { force: true }).catch((err) => ctx.logger.warn({ err, file }, 'could not remove a photo file'));
-    }
-  }
+  await deleteProjectPhotoFiles(ctx, projectId);
 }

@@ -6,6 +6,7 @@ import { checkPiece } from '@/engine/index';
 import { createTestContext, type TestContext } from '../../setup/test-app';
 import { signedInAgent } from '../../factories/users';
 import { buildProjectInput, createPattern, twoRoundBall } from '../../factories/projects';
+import { newStorageKey, photoFilePath } from '../../../server/lib/storage';
 
 let t: TestContext;
 beforeEach(async () => {
@@ -337,6 +338,21 @@ describe('GET /api/projects/:id reads the Tally records', () => {
   });
 });
 
+describe('the cover photo', () => {
+  it('is null until a photo is the cover, then carries its links from the photos work', async () => {
+    const { agent, user } = await signedInAgent(t.app, t.db);
+    const { body } = await agent.post('/api/projects').send(buildProjectInput());
+    expect(body.project.coverPhoto).toBeNull();
+    const key = newStorageKey();
+    const [{ id: photoId }] = await t.db('photos').insert({ project_id: body.project.id, owner_id: user.id, storage_key: key, width: 1200, height: 900, bytes: 5000, alt: 'The ball on the sill' }).returning('id');
+    await t.db('projects').where({ id: body.project.id }).update({ cover_photo_id: photoId });
+    const res = await agent.get(`/api/projects/${body.project.id}`);
+    expect(res.body.project.coverPhoto).toMatchObject({ id: photoId, width: 1200, height: 900, alt: 'The ball on the sill' });
+    expect(res.body.project.coverPhoto.url).toContain(key);
+    expect(res.body.project.coverPhoto.thumbUrl).toContain(key);
+  });
+});
+
 describe('PATCH /api/projects/:id', () => {
   it('changes details and dates with status, keeping dates already set', async () => {
     const { agent } = await signedInAgent(t.app, t.db);
@@ -459,14 +475,20 @@ describe('DELETE /api/projects/:id', () => {
     await t.db('piece_progress').insert({ piece_id: pieceId, done: 3, version: 3 });
     await t.db('placements').insert({ piece_id: pieceId, round: 2, label: 'eye' });
 
-    const files = (key: string) => [`${key}-display.jpg`, `${key}-thumb.jpg`].map((f) => path.join(t.env.uploadsDir, f));
-    const addPhoto = async (projectId: number, ownerId: string, key: string) => {
+    // Photo rows and files made by hand, where the photos work keeps them (server/lib/storage.ts).
+    const files: Record<string, string[]> = {};
+    const addPhoto = async (projectId: number, ownerId: string) => {
+      const key = newStorageKey();
       await t.db('photos').insert({ project_id: projectId, owner_id: ownerId, storage_key: key, width: 10, height: 10, bytes: 100 });
-      for (const f of files(key)) fs.writeFileSync(f, 'jpeg bytes');
+      files[key] = (['display', 'thumb'] as const).map((v) => photoFilePath(t.env.uploadsDir, projectId, key, v));
+      for (const f of files[key]) {
+        fs.mkdirSync(path.dirname(f), { recursive: true });
+        fs.writeFileSync(f, 'jpeg bytes');
+      }
+      return key;
     };
-    await addPhoto(id, user.id, 'k7Qm2cZp9sWx4TfB');
-    await addPhoto(id, user.id, 'R3nVb8LsYq1HdJe6');
-    await addPhoto(theirs.project.id, otherUser.id, 'Zt5Wc0PkMa2XuGh9');
+    const mine = [await addPhoto(id, user.id), await addPhoto(id, user.id)];
+    const theirsKey = await addPhoto(theirs.project.id, otherUser.id);
 
     const res = await agent.delete(`/api/projects/${id}`);
     expect(res.status).toBe(204);
@@ -475,8 +497,8 @@ describe('DELETE /api/projects/:id', () => {
     expect(await t.db('piece_progress').where({ piece_id: pieceId })).toEqual([]);
     expect(await t.db('placements').where({ piece_id: pieceId })).toEqual([]);
     expect(await t.db('photos').where({ project_id: id })).toEqual([]);
-    for (const f of [...files('k7Qm2cZp9sWx4TfB'), ...files('R3nVb8LsYq1HdJe6')]) expect(fs.existsSync(f), f).toBe(false);
-    for (const f of files('Zt5Wc0PkMa2XuGh9')) expect(fs.existsSync(f), f).toBe(true);
+    for (const f of mine.flatMap((k) => files[k])) expect(fs.existsSync(f), f).toBe(false);
+    for (const f of files[theirsKey]) expect(fs.existsSync(f), f).toBe(true);
     expect((await other.get(`/api/projects/${theirs.project.id}`)).status).toBe(200);
 
     expect((await agent.delete(`/api/projects/${id}`)).status).toBe(404);
