@@ -231,6 +231,7 @@ export async function addPhotos(ctx: Pick<AppContext, 'db' | 'env' | 'logger'>, 
 
   const jobs: ImageJob[] = files.map((f) => ({
     bytes: new Uint8Array(f.buffer.buffer, f.buffer.byteOffset, f.buffer.byteLength),
+    format: f.buffer[0] === 0xff ? 'jpg' : 'png',
     displayLongSide: PHOTO_LIMITS.displayLongSide,
     thumbSide: PHOTO_LIMITS.thumbSide,
   }));

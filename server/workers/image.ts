@@ -5,6 +5,8 @@ import { Jimp } from 'jimp';
 
 export interface ImageJob {
   bytes: Uint8Array;
+  /** From sniffing the bytes: only PNG can carry transparency worth flattening. */
+  format?: 'jpg' | 'png';
   displayLongSide: number;
   thumbSide: number;
 }
@@ -28,14 +30,18 @@ export default async function processImage(job: ImageJob): Promise<ImageResult> 
   const { width, height } = image.bitmap;
   if (!width || !height) throw new Error('the picture has no pixels');
 
-  if (image.hasAlpha()) {
+  if (job.format !== 'jpg' && image.hasAlpha()) {
     const flat = new Jimp({ width, height, color: OAT });
     flat.composite(image, 0, 0);
     image = flat as unknown as typeof image;
   }
 
   const scale = Math.min(1, job.displayLongSide / Math.max(width, height));
-  if (scale < 1) image.resize({ w: Math.max(1, Math.round(width * scale)), h: Math.max(1, Math.round(height * scale)) });
+  const target = { w: Math.max(1, Math.round(width * scale)), h: Math.max(1, Math.round(height * scale)) };
+  // Halving by 2×2 averages first is an exact area filter and far cheaper than Jimp's general resampler
+  // on 12 MP; Jimp then does the last, small step.
+  while (image.bitmap.width >= target.w * 2 && image.bitmap.height >= target.h * 2) halve(image.bitmap);
+  if (image.bitmap.width !== target.w || image.bitmap.height !== target.h) image.resize(target);
   // Re-encoding writes a bare JFIF file: no EXIF, GPS or XMP survives.
   const display = await image.getBuffer('image/jpeg', { quality: DISPLAY_QUALITY });
   const out = { width: image.bitmap.width, height: image.bitmap.height };
@@ -45,4 +51,27 @@ export default async function processImage(job: ImageJob): Promise<ImageResult> 
   const thumb = await image.getBuffer('image/jpeg', { quality: THUMB_QUALITY });
 
   return { display: new Uint8Array(display), thumb: new Uint8Array(thumb), ...out };
+}
+
+/** Halves a bitmap in place (RGBA), each output pixel the rounded mean of a 2×2 block. */
+function halve(bitmap: { data: Buffer; width: number; height: number }) {
+  const { data, width } = bitmap;
+  const w = Math.floor(bitmap.width / 2);
+  const h = Math.floor(bitmap.height / 2);
+  const out = Buffer.allocUnsafe(w * h * 4);
+  const row = width * 4;
+  for (let y = 0; y < h; y++) {
+    let src = y * 2 * row;
+    let dst = y * w * 4;
+    for (let x = 0; x < w; x++, src += 8, dst += 4) {
+      const below = src + row;
+      out[dst] = (data[src] + data[src + 4] + data[below] + data[below + 4] + 2) >> 2;
+      out[dst + 1] = (data[src + 1] + data[src + 5] + data[below + 1] + data[below + 5] + 2) >> 2;
+      out[dst + 2] = (data[src + 2] + data[src + 6] + data[below + 2] + data[below + 6] + 2) >> 2;
+      out[dst + 3] = (data[src + 3] + data[src + 7] + data[below + 3] + data[below + 7] + 2) >> 2;
+    }
+  }
+  bitmap.data = out;
+  bitmap.width = w;
+  bitmap.height = h;
 }
