@@ -46,7 +46,7 @@ type Item =
 const CLOSER: Record<string, string> = { '(': ')', '[': ']', '{': '}' };
 const SEP_PUNCT = new Set([',', ';', '.', ':', '+', '/', '=', '-']);
 const LOOP_WORDS = new Set(['blo', 'flo', 'in', 'on', 'working', 'work', 'only', 'throughout', 'rnd', 'row', 'for', 'st', 'each', 'around', 'across', 'loops', 'loop', 'whole', 'entire', 'all', 'both', 'here', 'now']);
-const COMMENT_BRACKET = /^(rs|ws|right side|wrong side|optional|see (note|photo|picture)s?.*)$/;
+const COMMENT_BRACKET = /^(rs|ws|right side|wrong side|optional|see (note|photo|picture)s?.*|\d+ (rnds?|rounds?|rows?|rds?))$/;
 
 const error = (message: string, column: number | null): Problem => ({ message, column, severity: 'error' });
 const warning = (message: string, column: number | null): Problem => ({ message, column, severity: 'warning' });
@@ -254,11 +254,12 @@ function statedOf(br: Br, r: Reader): number | null {
   const rest = els.slice(i + 1);
   if (rest.length === 1 && r.isStitchWord(rest[0])) return n;
   if (rest.length >= 1 && isWord(rest[0], 'st') && isP(rest[1], ',')) return n;
-  const ok = rest.every((e) => isWord(e, 'st', 'total', 'in', 'all', 'made', 'around', 'each', 'now', 'remaining', 'rnd', 'row'));
+  const ok = rest.every((e) => isWord(e, 'st', 'total', 'in', 'all', 'made', 'around', 'each', 'now', 'remaining'));
   return ok ? n : null;
 }
 
 type BracketKind =
+  | { k: 'times'; n: number; more: boolean; ambiguous: boolean; fill: number | null }
   | { k: 'counts'; as: StitchEntry | null }
   | { k: 'notcounts' }
   | { k: 'loop'; loop: Loop | null }
@@ -286,9 +287,23 @@ function bracketKind(br: Br, r: Reader): BracketKind {
   }
   const text = r.slice(br.col + 1, br.close ? br.close.col : br.end);
   if (COMMENT_BRACKET.test(text.toLowerCase())) return { k: 'comment' };
+  // "(repeat 6 times)", "(rep 5 more times)", "(x6)": a repeat count for what comes before.
+  const tm = readTimes(br.els, 0);
+  if (tm && tm.next === br.els.length) return { k: 'times', n: tm.n, more: tm.more, ambiguous: isWord(br.els[0], 'rep'), fill: null };
+  if (isWord(br.els[0], 'rep') && br.els.length > 1) {
+    const fill = readFill(br.els, 0);
+    if (fill && fill.next === br.els.length) return { k: 'times', n: 0, more: false, ambiguous: false, fill: fill.leave };
+  }
   const stitchy = toks.some((t) => t.k === 'num' || (t.k === 'p' && t.v === '*') || r.isStitchWord(t) || ['sk', 'rep', 'join', 'turn', 'mr', 'blo', 'flo'].includes(t.v));
   if (!stitchy) return { k: 'comment' };
   return { k: 'group' };
+}
+
+function timesOf(kind: Extract<BracketKind, { k: 'times' }>, r: Reader): Times {
+  if (kind.fill !== null) return { k: 'fill', leave: kind.fill };
+  if (kind.more) return { k: 'n', n: kind.n + 1 };
+  // "(repeat 6 times)" after a sequence: 6 in all or 6 more, whichever fits.
+  return kind.ambiguous ? { k: 'alt', id: r.alt(2), options: [kind.n, kind.n + 1] } : { k: 'n', n: kind.n };
 }
 
 /** "x6", "6 times", "6x", "5 more times", "twice" → how many times, and whether "more" was said. */
@@ -465,7 +480,7 @@ function readTarget(c: Cursor, r: Reader): Target | null {
     readNoun(c, r);
     if (isWord(c.el, 'as')) {
       c.i++;
-      while (c.el && isTok(c.el) && c.el.k === 'word' && !isWord(c.el, 'in', 'on')) c.i++;
+      while (c.el && isTok(c.el) && (c.el.k === 'word' || c.el.k === 'num') && !isWord(c.el, 'in', 'on')) c.i++;
     }
     tg.into = { t: 'same' };
   } else if (isTok(e) && e.k === 'ord') {
@@ -837,7 +852,12 @@ function readClause(cl: Clause, r: Reader, out: Item[], top: boolean): void {
   let closeStar: { col: number; times: Times | null } | null = null;
   // In "rep from * …" the star names the repeat's start; it closes nothing.
   const startsRep = isWord(els[0], 'rep', 'work', 'as');
-  const starAt = startsRep ? -1 : els.findIndex((e) => isP(e, '*'));
+  let starAt = startsRep ? -1 : els.findIndex((e) => isP(e, '*'));
+  if (starAt > 0 && els[starAt - 1].k === 'br' && isNum(els[starAt + 1])) {
+    // "(2 sc, inc)*6": the star is a times sign.
+    els = [...els.slice(0, starAt), { ...(els[starAt] as Tok), k: 'word', v: 'x' }, ...els.slice(starAt + 1)];
+    starAt = els.findIndex((e) => isP(e, '*'));
+  }
   if (starAt >= 0) {
     const after = els.slice(starAt + 1).filter((e) => !isP(e, '*'));
     const tm = readTimes(after, 0);
@@ -920,7 +940,12 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
       annotateLastChain(r, kind);
       return;
     }
+    if (kind.k === 'times') {
+      out.push({ t: 'reptimes', col, times: timesOf(kind, r) });
+      return;
+    }
   }
+  if (has('join') && has('not')) return; // "do not join": spiral rounds
   if (has('join')) {
     if (has('ring') || has('form')) out.push({ t: 'ring', col, formed: true });
     else out.push({ t: 'join', col });
@@ -1008,7 +1033,18 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
         c.i++;
         continue;
       }
+      if (kind.k === 'times') {
+        out.push({ t: 'reptimes', col: e.col, times: timesOf(kind, r) });
+        c.i++;
+        continue;
+      }
       readGroup(c, r, out, clauseLoop);
+      continue;
+    }
+    if (isWord(e, 'in', 'on') && isWord(c.at(1), 'mr', 'ring') && !c.at(2)) {
+      // "In a magic ring, work 6 sc"
+      out.push({ t: 'ring', col: e.col, formed: false });
+      c.i += 2;
       continue;
     }
     if (isWord(e, 'mr', 'ring')) {
@@ -1337,7 +1373,7 @@ function takeStated(els: El[], r: Reader): { stated: number | null; col: number 
     if (e.k === 'br') {
       const n = statedOf(e, r);
       if (n !== null) {
-        const tail = els.slice(i + 1).filter((x) => !(isTok(x) && x.k === 'p'));
+        const tail = els.slice(i + 1).filter((x) => !(isTok(x) && x.k === 'p') && !(x.k === 'br' && bracketKind(x, r).k === 'comment'));
         return { stated: n, col: e.col, cut: i, trailingFrom: tail.length ? i + 1 : null };
       }
       // Only the last bracket can be the count; an earlier one would leave instructions after it.

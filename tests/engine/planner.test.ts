@@ -64,5 +64,5 @@ describe('planRound', () => {
     }
     expect(wrong).toEqual([]);
     expect(checked).toBe(2 * Array.from({ length: 150 }, (_, i) => 2 * (i + 1) - Math.ceil((i + 1) / 2) + 1).reduce((a, b) => a + b, 0));
-  });
+  }, 60_000);
 });

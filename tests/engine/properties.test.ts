@@ -79,7 +79,7 @@ describe('checkPiece never throws', () => {
       ),
       { numRuns: 1500 },
     );
-  });
+  }, 60_000);
 
   it('on things that are not strings at all', () => {
     for (const bad of [undefined, null, 42, {}, [], { toString: () => 'Rnd 1: 6 sc in MR' }]) {
@@ -100,7 +100,7 @@ describe('planner read-back', () => {
       }),
       { numRuns: 1000 },
     );
-  });
+  }, 60_000);
 
   it('refuses, with a RangeError, every TO outside ceil(FROM/2)..2·FROM', () => {
     fc.assert(
