@@ -22,6 +22,8 @@ const publicScreens: RouteObject[] = [
 
 const standaloneScreens: RouteObject[] = [
   // full-screen pages outside the app shell, e.g. the Tally (issue 6) and the showcase /p/:token (issue 8)
+  // The Tally is for the signed-in member only, but full-screen: guarded here, outside AppLayout.
+  { element: <RequireAuth />, children: [{ path: '/projects/:projectId/pieces/:pieceId/count', ...screen(() => import('./routes/tally')) }] },
   { path: '/p/:token', ...screen(() => import('./routes/showcase')) },
   { path: '/m/:makerId', ...screen(() => import('./routes/maker-profile')) },
 ];

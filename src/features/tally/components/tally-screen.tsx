@@ -1,0 +1,590 @@
+import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import {
+  ArrowLeft,
+  CheckCheck,
+  CircleCheck,
+  Cloud,
+  CloudOff,
+  ListOrdered,
+  MapPin,
+  MapPinPlus,
+  Plus,
+  Repeat,
+  Settings2,
+  Undo2,
+} from 'lucide-react';
+import type { Terms } from '@/engine/types';
+import type { StitchSize } from '@/components/silhouette/geometry';
+import { Loading } from '@/components/ui/page';
+import { cn } from '@/utils/cn';
+import { usePlacements } from '../api/get-placements';
+import { useDeletePlacement } from '../api/delete-placement';
+import { useTally, type TallyPiece } from '../hooks/use-tally';
+import { useOutbox } from '../hooks/use-outbox';
+import { useWakeLock } from '../hooks/use-wake-lock';
+import { useProgressStream } from '../hooks/use-progress-stream';
+import { buzz, click } from '../lib/feedback';
+import { outbox } from '../lib/outbox';
+import { newOpId } from '../lib/op-id';
+import { useTallySettings } from '../lib/settings';
+import { InstructionLine } from './instruction-line';
+import { NoteCard } from './note-card';
+import { SyncBanner } from './sync-banner';
+import { JumpSheet } from './jump-sheet';
+import { MarkSheet } from './mark-sheet';
+import { MarksSheet, PieceMarks, placementWhere, type ShownPlacement } from './marks-sheet';
+import { SettingsSheet } from './settings-sheet';
+import { TimeLine } from './time-line';
+
+export interface TallyScreenProps {
+  piece: TallyPiece;
+  /** The signed-in member: their taps are queued under their id. */
+  memberId: string;
+  terms: Terms;
+  projectTitle: string;
+  backTo: string;
+  /** Steps still to count on the project's other pieces, for the project estimate (null when unknown). */
+  otherPiecesRemaining: number | null;
+  /** Safety cautions of the project, shown with placement notes. */
+  cautions: string[];
+  stitchSize: StitchSize;
+}
+
+type Sheet = 'jump' | 'mark' | 'marks' | 'settings' | null;
+
+const STEP_KEYS = new Set([' ', 'Spacebar', 'Enter', 'ArrowRight', 'ArrowDown', 'PageDown']);
+const UNDO_KEYS = new Set(['Backspace', 'ArrowLeft', 'ArrowUp', 'PageUp']);
+const DEFAULT_LABELS = ['left eye', 'right eye', 'nose', 'mouth', 'arm', 'leg', 'ear'];
+
+function ToolButton({
+  onClick,
+  icon,
+  children,
+  label,
+  disabled,
+  tone = 'plain',
+}: {
+  onClick: () => void;
+  icon: ReactNode;
+  children: ReactNode;
+  label?: string;
+  disabled?: boolean;
+  tone?: 'plain' | 'strong';
+}) {
+  return (
+    <button
+      type="button"
+      onClick={onClick}
+      disabled={disabled}
+      aria-label={label}
+      className={cn(
+        'flex min-h-16 flex-1 flex-col items-center justify-center gap-0.5 rounded-soft px-1 text-sm font-bold select-none disabled:opacity-40 sm:flex-row sm:gap-2 sm:text-base',
+        tone === 'strong'
+          ? 'bg-ink text-oat dark:bg-oat dark:text-ink'
+          : 'bg-wool text-ink hover:bg-[#d9ccb4] dark:bg-[#3a3430] dark:text-oat dark:hover:bg-[#4a423c]',
+      )}
+    >
+      {icon}
+      <span>{children}</span>
+    </button>
+  );
+}
+
+/** The Tally: one piece, counted stitch by stitch (or round by round) with one huge tap zone. */
+export function TallyScreen({
+  piece,
+  memberId,
+  terms,
+  projectTitle,
+  backTo,
+  otherPiecesRemaining,
+  cautions,
+  stitchSize,
+}: TallyScreenProps) {
+  const tally = useTally(piece, terms, memberId);
+  const [settings, setSettings] = useTallySettings();
+  const box = useOutbox();
+  const stream = useProgressStream(piece.id);
+  const wake = useWakeLock(settings.keepAwake);
+  const placementsQuery = usePlacements(piece.id);
+  const deletePlacement = useDeletePlacement(piece.id);
+  const [sheet, setSheet] = useState<Sheet>(null);
+  const zone = useRef<HTMLButtonElement>(null);
+  const hc = settings.highContrast;
+  const { view, position } = tally;
+
+  const feedback = useCallback(
+    (kind: 'step' | 'round' | 'note' | 'undo' | 'end') => {
+      if (kind === 'end') return;
+      if (settings.vibrate) buzz(kind);
+      if (settings.sound && kind !== 'note') click(kind);
+    },
+    [settings.vibrate, settings.sound],
+  );
+
+  const countTap = useCallback(() => {
+    feedback(settings.mode === 'round' ? tally.round() : tally.step());
+  }, [feedback, settings.mode, tally]);
+  const undo = useCallback(() => {
+    if (tally.undo()) feedback('undo');
+  }, [feedback, tally]);
+  const roundDone = useCallback(() => feedback(tally.round()), [feedback, tally]);
+  // After any control, the next pedal press or Enter should count again, not repeat that control.
+  const backToZone = () => zone.current?.focus({ preventScroll: true });
+
+  // Hands-free: a keyboard or a Bluetooth page-turner pedal.
+  const keys = useRef({ countTap, undo });
+  keys.current = { countTap, undo };
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (e.ctrlKey || e.metaKey || e.altKey || e.defaultPrevented) return;
+      const t = e.target as HTMLElement | null;
+      if (t && (t.closest('input, textarea, select, [contenteditable="true"]') || t.closest('dialog[open]')))
+        return;
+      if (document.querySelector('dialog[open]')) return;
+      const isStep = STEP_KEYS.has(e.key);
+      const isUndo = UNDO_KEYS.has(e.key);
+      if (!isStep && !isUndo) return;
+      // Enter or Space on another button presses that button, as a keyboard user expects.
+      if ((e.key === 'Enter' || e.key === ' ') && t && t !== zone.current && t.closest('button, a')) return;
+      e.preventDefault();
+      if (e.repeat) return; // a held key or a bouncing pedal is one tap
+      if (isStep) keys.current.countTap();
+      else keys.current.undo();
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
+
+  const placements: ShownPlacement[] = useMemo(() => {
+    const saved = (placementsQuery.data ?? []).map((p) => ({ ...p, waiting: false, key: `s${p.id}` }));
+    const queued = box.items.flatMap((i) =>
+      i.kind === 'placement' && i.pieceId === piece.id
+        ? [
+            {
+              id: null,
+              pieceId: piece.id,
+              copy: i.input.copy ?? 1,
+              round: i.input.round,
+              step: i.input.step ?? null,
+              label: i.input.label,
+              note: i.input.note ?? null,
+              waiting: true,
+              key: `q${i.opId}`,
+            },
+          ]
+        : [],
+    );
+    return [...saved, ...queued];
+  }, [placementsQuery.data, box.items, piece.id]);
+
+  const whereNow =
+    view && position
+      ? placementWhere(
+          { round: view.round.number, step: view.stepsDone, copy: position.copy },
+          piece.copies,
+          view.word,
+        )
+      : '';
+  const saveMark = (v: { label: string; note: string }) => {
+    if (!view || !position) return;
+    outbox.enqueue(
+      {
+        kind: 'placement',
+        pieceId: piece.id,
+        input: {
+          opId: newOpId(),
+          round: view.round.number,
+          step: view.stepsDone,
+          copy: position.copy,
+          label: v.label,
+          ...(v.note ? { note: v.note } : {}),
+        },
+      },
+      memberId,
+    );
+  };
+  const suggestions = useMemo(() => {
+    const fromNotes = tally.check.notes.flatMap((n) =>
+      n.kind === 'placement' && n.placement?.label ? [n.placement.label] : [],
+    );
+    const fromOthers = placements.filter((p) => p.round === view?.round.number).map((p) => p.label);
+    return [...new Set([...fromOthers, ...fromNotes, ...DEFAULT_LABELS])].slice(0, 8);
+  }, [tally.check.notes, placements, view?.round.number]);
+  // Where the same part went on another copy at this round: the second ear goes where the first did.
+  const earlier =
+    view && position
+      ? placements.filter((p) => p.round === view.round.number && p.copy !== position.copy)
+      : [];
+
+  const announcement = useMemo(() => {
+    if (!view || !position) return '';
+    const copy = piece.copies > 1 ? `${piece.name} ${position.copy} of ${piece.copies}. ` : '';
+    if (tally.unread.length) return `${copy}Note: ${tally.unread[0].note.text}`;
+    if (tally.finished) return `${copy}${piece.name} is counted to the end.`;
+    return `${copy}${view.name} of ${view.of}, stitch ${view.stepsDone} of ${view.stepsInRound}. ${view.next ? `Next: ${view.next.text}.` : ''}`;
+  }, [view, position, piece, tally.unread, tally.finished]);
+
+  const rootTone = hc
+    ? 'bg-white text-black dark:bg-black dark:text-white'
+    : 'bg-oat text-ink dark:bg-ink dark:text-oat';
+  const zoneTone = hc
+    ? 'bg-white text-black ring-4 ring-black active:bg-[#e6e6e6] dark:bg-black dark:text-white dark:ring-white dark:active:bg-[#222]'
+    : 'bg-white/75 text-ink ring-2 ring-wool active:bg-wool dark:bg-[#332e2a] dark:text-oat dark:ring-[#4a423c] dark:active:bg-[#4a423c]';
+
+  if (!position || !view || !box.loaded) {
+    return (
+      <div
+        className={cn('flex min-h-dvh flex-col items-center justify-center gap-4 p-6 text-center', rootTone)}
+      >
+        {tally.progress.isError && !tally.progress.data ? (
+          <>
+            <p className="text-xl font-bold">The Tally cannot open this piece right now.</p>
+            <p>
+              {navigator.onLine === false
+                ? 'You are offline, and this piece was not opened on this device before. Open it once while online and it will work offline after.'
+                : tally.progress.error.message}
+            </p>
+            <Link to={backTo} className="min-h-tap rounded-soft bg-moss px-5 py-3 font-bold text-oat">
+              Back to {projectTitle}
+            </Link>
+          </>
+        ) : tally.check.rounds.length === 0 && tally.progress.data ? (
+          <>
+            <p className="text-xl font-bold">{piece.name} has no rounds to count yet.</p>
+            <p>
+              Add its instructions on the project page (for example “Rnd 1: 6 sc in MR (6)”), then come back.
+            </p>
+            <Link to={backTo} className="min-h-tap rounded-soft bg-moss px-5 py-3 font-bold text-oat">
+              Back to {projectTitle}
+            </Link>
+          </>
+        ) : (
+          <Loading label="Opening the Tally…" />
+        )}
+      </div>
+    );
+  }
+
+  const next = view.next;
+  const unread = tally.unread[0];
+  const zoneLabel = unread
+    ? `Done: ${unread.note.text}`
+    : tally.finished
+      ? `${piece.name} is counted to the end`
+      : settings.mode === 'round'
+        ? `Round done: finish ${view.name}`
+        : 'Count one stitch';
+  const waiting = box.items.filter((i) => i.memberId === memberId).length;
+  const synced = waiting === 0;
+
+  return (
+    <div
+      className={cn('flex h-dvh flex-col overflow-hidden', rootTone)}
+      data-theme-contrast={hc ? 'high' : 'normal'}
+    >
+      <header className="flex items-center gap-1 px-2 pt-[max(0.25rem,env(safe-area-inset-top))]">
+        <Link
+          to={backTo}
+          className="flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
+          aria-label={`Back to ${projectTitle}`}
+        >
+          <ArrowLeft aria-hidden className="h-7 w-7" />
+        </Link>
+        <div className="min-w-0 flex-1">
+          <h1 className="truncate text-xl font-bold leading-tight sm:text-2xl">
+            {piece.name}
+            {piece.copies > 1 ? (
+              <span className="tabular">
+                {' '}
+                {position.copy} of {piece.copies}
+              </span>
+            ) : null}
+          </h1>
+          <p className="truncate text-sm opacity-75">{projectTitle}</p>
+        </div>
+        <span
+          className={cn(
+            'flex min-h-14 items-center gap-1 rounded-soft px-2 text-sm font-bold',
+            synced ? 'opacity-75' : 'text-clay dark:text-[#e8a283]',
+          )}
+          title={
+            stream === 'live' ? 'Live with your other devices' : 'Checking for changes every few seconds'
+          }
+        >
+          {synced ? <Cloud aria-hidden className="h-5 w-5" /> : <CloudOff aria-hidden className="h-5 w-5" />}
+          <span className="tabular">{synced ? 'Saved' : `${waiting} waiting`}</span>
+        </span>
+        <button
+          type="button"
+          onClick={() => setSheet('marks')}
+          className="relative flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
+          aria-label={`Marks and silhouette (${placements.length})`}
+        >
+          <MapPin aria-hidden className="h-7 w-7" />
+          {placements.length ? (
+            <span className="tabular absolute top-1 right-1 rounded-full bg-clay px-1.5 text-xs font-bold text-oat">
+              {placements.length}
+            </span>
+          ) : null}
+        </button>
+        <button
+          type="button"
+          onClick={() => setSheet('settings')}
+          className="flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
+          aria-label="Tally settings"
+        >
+          <Settings2 aria-hidden className="h-7 w-7" />
+        </button>
+      </header>
+
+      <div className="flex flex-col gap-2 px-3 empty:hidden">
+        <SyncBanner state={box} memberId={memberId} pieceId={piece.id} />
+        {wake === 'unsupported' || wake === 'refused' ? (
+          <p className="rounded-soft bg-wool/70 px-4 py-1.5 text-sm text-ink">
+            <span className="font-bold">Screen may sleep:</span>{' '}
+            {wake === 'unsupported'
+              ? 'this browser cannot keep it awake.'
+              : 'the browser refused to keep it awake.'}{' '}
+            Set a longer screen timeout in your device settings while you count.
+          </p>
+        ) : null}
+      </div>
+
+      <div className="flex min-h-0 flex-1 gap-3 px-3 py-2">
+        <button
+          ref={zone}
+          type="button"
+          aria-label={zoneLabel}
+          aria-describedby="tally-position"
+          onPointerDown={(e) => {
+            if (e.button !== 0 || !e.isPrimary) return;
+            // Counting on pointerdown paints in the same frame; the browser's later click is ignored below.
+            e.preventDefault();
+            zone.current?.focus({ preventScroll: true });
+            countTap();
+          }}
+          onClick={(e) => {
+            // Screen readers and switch access send a click with no pointer press before it.
+            if (e.detail === 0) countTap();
+          }}
+          onContextMenu={(e) => e.preventDefault()}
+          className={cn(
+            'flex min-h-0 flex-1 touch-manipulation flex-col rounded-blob px-4 py-3 text-left select-none focus-visible:outline-offset-4 md:px-8 md:py-6',
+            zoneTone,
+          )}
+          data-testid="tally-zone"
+        >
+          {unread ? (
+            <NoteCard
+              due={unread}
+              roundName={view.name}
+              more={tally.unread.length - 1}
+              cautions={unread.note.kind === 'placement' ? cautions : []}
+            />
+          ) : tally.finished ? (
+            <span className="flex h-full flex-col items-center justify-center gap-3 text-center">
+              <CircleCheck aria-hidden className="h-16 w-16 text-moss dark:text-[#9cc3a8]" />
+              <span className="block text-3xl font-bold">{piece.name} is counted to the end</span>
+              <span className="block text-lg">
+                All {tally.check.rounds.length} rounds
+                {piece.copies > 1 ? ` of all ${piece.copies} copies` : ''}. Undo if that was one tap too many.
+              </span>
+            </span>
+          ) : (
+            <>
+              <span className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
+                <span className="tabular text-4xl font-bold sm:text-5xl md:text-6xl">
+                  {view.word} {view.round.number}
+                  <span className="text-2xl font-semibold opacity-70 sm:text-3xl"> of {view.of}</span>
+                </span>
+                {view.round.loops.map((l) => (
+                  <span
+                    key={l}
+                    className="rounded-full border-2 border-current px-3 py-0.5 text-base font-bold"
+                  >
+                    {l === 'blo' ? 'BLO · back loop only' : 'FLO · front loop only'}
+                  </span>
+                ))}
+                <span className="tabular text-lg font-semibold opacity-80">
+                  ends with {view.expected} sts
+                </span>
+              </span>
+              <InstructionLine
+                segments={view.segments}
+                highContrast={hc}
+                className="mt-2 line-clamp-4 md:text-3xl"
+              />
+              {earlier.length ? (
+                <span className="mt-2 block rounded-soft bg-[#f3dccf] px-3 py-1.5 text-base font-semibold text-ink">
+                  <MapPin aria-hidden className="mr-1 inline h-4 w-4" />
+                  On copy {earlier[0].copy}:{' '}
+                  {earlier
+                    .map((p) => `${p.label}${p.step !== null ? ` at stitch ${p.step}` : ''}`)
+                    .join(', ')}
+                </span>
+              ) : null}
+              <span className="flex flex-1 flex-col items-center justify-center py-2 text-center">
+                {settings.mode === 'round' ? (
+                  <>
+                    <span className="block text-3xl font-bold">Tap when {view.name} is done</span>
+                    <span className="tabular mt-2 block text-xl">{view.expected} stitches at the end</span>
+                  </>
+                ) : (
+                  <>
+                    <span
+                      className="tabular block text-8xl leading-none font-bold sm:text-9xl md:text-[11rem]"
+                      aria-hidden
+                    >
+                      {view.round.worked > 0 ? view.worked : view.made}
+                    </span>
+                    <span className="tabular mt-1 block text-xl font-semibold sm:text-2xl">
+                      {view.round.worked > 0
+                        ? `of ${view.round.worked} worked — ${view.made} made`
+                        : `of ${view.round.stitches} made`}
+                    </span>
+                    {view.stepsInRound !== (view.round.worked || view.round.stitches) ? (
+                      <span className="tabular mt-1 block text-base opacity-75">
+                        step {Math.min(view.stepsDone + 1, view.stepsInRound)} of {view.stepsInRound}
+                      </span>
+                    ) : null}
+                    {next ? (
+                      <span className="mt-4 block text-2xl leading-snug font-bold sm:text-3xl">
+                        <span className="font-semibold opacity-75">Next: </span>
+                        {next.text}
+                      </span>
+                    ) : (
+                      <span className="mt-4 block text-2xl font-bold">
+                        Work {view.name} as written, then tap
+                      </span>
+                    )}
+                    {next?.repeat ? (
+                      <span className="tabular mt-2 flex items-center gap-1 text-lg font-semibold">
+                        <Repeat aria-hidden className="h-5 w-5" /> repeat {next.repeat.index} of{' '}
+                        {next.repeat.of}
+                      </span>
+                    ) : null}
+                  </>
+                )}
+              </span>
+              <span className="block text-center text-sm opacity-60">
+                {settings.mode === 'round'
+                  ? 'Tap anywhere here when the round is done'
+                  : 'Tap anywhere here for each stitch'}
+              </span>
+            </>
+          )}
+        </button>
+        {/* On a tablet there is room to keep the silhouette in view beside the tap zone. */}
+        <aside
+          aria-label={`Marks on ${piece.name}`}
+          className="hidden w-72 shrink-0 overflow-y-auto md:block lg:w-80"
+        >
+          <PieceMarks
+            check={tally.check}
+            size={stitchSize}
+            placements={placements}
+            copies={piece.copies}
+            pieceName={piece.name}
+            current={view.round.number}
+            compact
+          />
+        </aside>
+      </div>
+      <p id="tally-position" className="sr-only" aria-live="polite" aria-atomic="true">
+        {announcement}
+      </p>
+
+      <div className="px-3">
+        <TimeLine
+          clock={tally.clock}
+          remainingPiece={tally.remainingSteps}
+          remainingProject={
+            otherPiecesRemaining === null ? null : otherPiecesRemaining + tally.remainingSteps
+          }
+          done={tally.done}
+        />
+      </div>
+      <nav aria-label="Tally" className="flex gap-2 px-3 pt-2 pb-[max(0.75rem,env(safe-area-inset-bottom))]">
+        <ToolButton
+          tone="strong"
+          onClick={() => {
+            undo();
+            backToZone();
+          }}
+          disabled={!tally.canUndo}
+          icon={<Undo2 aria-hidden className="h-6 w-6" />}
+        >
+          Undo
+        </ToolButton>
+        {settings.mode === 'round' ? (
+          <ToolButton
+            onClick={() => {
+              feedback(tally.step());
+              backToZone();
+            }}
+            disabled={tally.finished && !unread}
+            icon={<Plus aria-hidden className="h-6 w-6" />}
+          >
+            One stitch
+          </ToolButton>
+        ) : (
+          <ToolButton
+            onClick={() => {
+              roundDone();
+              backToZone();
+            }}
+            disabled={tally.finished && !unread}
+            icon={<CheckCheck aria-hidden className="h-6 w-6" />}
+          >
+            Round done
+          </ToolButton>
+        )}
+        <ToolButton onClick={() => setSheet('mark')} icon={<MapPinPlus aria-hidden className="h-6 w-6" />}>
+          Mark here
+        </ToolButton>
+        <ToolButton onClick={() => setSheet('jump')} icon={<ListOrdered aria-hidden className="h-6 w-6" />}>
+          Jump
+        </ToolButton>
+      </nav>
+
+      <JumpSheet
+        open={sheet === 'jump'}
+        onClose={() => setSheet(null)}
+        check={tally.check}
+        copies={piece.copies}
+        pieceName={piece.name}
+        position={position}
+        onJump={(to) => {
+          tally.jump(to);
+          backToZone();
+        }}
+      />
+      <MarkSheet
+        open={sheet === 'mark'}
+        onClose={() => setSheet(null)}
+        where={whereNow}
+        suggestions={suggestions}
+        onSave={saveMark}
+      />
+      <MarksSheet
+        open={sheet === 'marks'}
+        onClose={() => setSheet(null)}
+        check={tally.check}
+        size={stitchSize}
+        placements={placements}
+        copies={piece.copies}
+        pieceName={piece.name}
+        current={view.round.number}
+        onDelete={(id) => deletePlacement.mutate(id)}
+      />
+      <SettingsSheet
+        open={sheet === 'settings'}
+        onClose={() => setSheet(null)}
+        settings={settings}
+        onChange={setSettings}
+      />
+    </div>
+  );
+}
