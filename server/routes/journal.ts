@@ -57,7 +57,9 @@ export function journalRouter(ctx: AppContext) {
     photoUpload,
     async (req, res) => {
       const { entryId } = req.params as unknown as z.infer<typeof EntryParams>;
-      const photos = await addPhotos(ctx, currentUser(res).id, entryId, uploadedFiles(req));
+      const { photos, timing } = await addPhotos(ctx, currentUser(res).id, entryId, uploadedFiles(req));
+      // Standard Server-Timing: how long the photos waited for the worker and how long it worked on them.
+      res.set('Server-Timing', `queue;dur=${timing.queuedMs.toFixed(0)}, resize;dur=${timing.workMs.toFixed(0)}`);
       res.status(201).json({ photos });
     },
   );

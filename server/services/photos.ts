@@ -221,7 +221,12 @@ async function ownedEntryWithSubject(db: Knex, userId: string, entryId: number) 
  * Adds photos to an entry, all or nothing: if any file is refused, none is kept and the answer names each
  * refused file and why. Files are written before the rows and removed again if the rows cannot be saved.
  */
-export async function addPhotos(ctx: Pick<AppContext, 'db' | 'env' | 'logger'>, userId: string, entryId: number, files: UploadedFile[]): Promise<PhotoOut[]> {
+export async function addPhotos(
+  ctx: Pick<AppContext, 'db' | 'env' | 'logger'>,
+  userId: string,
+  entryId: number,
+  files: UploadedFile[],
+): Promise<{ photos: PhotoOut[]; timing: { queuedMs: number; workMs: number } }> {
   const { db, env, logger } = ctx;
   const entry = await ownedEntryWithSubject(db, userId, entryId);
   if (files.length === 0) throw new HttpError(422, 'Choose at least one photo to add (form field "photos").');
@@ -235,7 +240,9 @@ export async function addPhotos(ctx: Pick<AppContext, 'db' | 'env' | 'logger'>, 
     displayLongSide: PHOTO_LIMITS.displayLongSide,
     thumbSide: PHOTO_LIMITS.thumbSide,
   }));
+  const sent = performance.now();
   const results = await imagePool().runBatch(jobs);
+  const waited = performance.now() - sent;
   const decodeRefusals = results.map((r, i): Refusal | null => {
     if (!(r instanceof Error)) return null;
     logger.warn({ err: r, file: files[i].originalname }, 'photo could not be decoded');
@@ -274,7 +281,8 @@ export async function addPhotos(ctx: Pick<AppContext, 'db' | 'env' | 'logger'>, 
       await trx('journal_entries').where({ id: entry.id }).update({ updated_at: db.fn.now() });
       return inserted;
     });
-    return rows.map(photoOut);
+    const workMs = ready.reduce((sum, p) => sum + p.result.ms, 0);
+    return { photos: rows.map(photoOut), timing: { workMs, queuedMs: Math.max(0, waited - workMs) } };
   } catch (err) {
     await Promise.all(written.map((key) => deletePhotoFiles(env.uploadsDir, entry.project_id, key)));
     throw err;

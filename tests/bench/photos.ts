@@ -90,7 +90,8 @@ async function main() {
         const start = performance.now();
         const res = await fetch(`${base}/api/entries/${entry.id}/photos`, { method: 'POST', headers: { cookie }, body: form });
         const body = (await res.json()) as { photos?: Array<{ width: number; height: number }>; error?: string };
-        return { status: res.status, seconds: (performance.now() - start) / 1000, body };
+        const timing = Object.fromEntries((res.headers.get('server-timing') ?? '').split(',').map((p) => p.trim().match(/^(\w+);dur=(\d+)/)?.slice(1) ?? []).filter((p) => p.length));
+        return { status: res.status, seconds: (performance.now() - start) / 1000, body, resize: Number(timing.resize) / 1000, queued: Number(timing.queue) / 1000 };
       }),
     );
     const total = (performance.now() - t0) / 1000;
@@ -103,9 +104,12 @@ async function main() {
     console.log('\nPhotos (three requests at once, one photo each):');
     results.forEach((r, i) => {
       const p = r.body.photos?.[0];
-      console.log(`  photo ${i + 1}: ${r.status} in ${r.seconds.toFixed(2)} s${p ? ` → ${p.width} × ${p.height}` : ` (${r.body.error})`}`);
+      console.log(
+        `  photo ${i + 1}: ${r.status} in ${r.seconds.toFixed(2)} s (waited ${r.queued.toFixed(2)} s for the worker, resized in ${r.resize.toFixed(2)} s)${p ? ` → ${p.width} × ${p.height}` : ` (${r.body.error})`}`,
+      );
     });
-    console.log(`  total: ${total.toFixed(2)} s; server work per photo: ${(total / PHOTOS).toFixed(2)} s`);
+    const resize = results.map((r) => r.resize);
+    console.log(`  total: ${total.toFixed(2)} s; resize time per photo: mean ${(resize.reduce((a, b) => a + b, 0) / PHOTOS).toFixed(2)} s, max ${Math.max(...resize).toFixed(2)} s`);
     console.log(`\n/api/health during the run: ${health.length} calls; p50 ${ms(pct(sorted, 50))}, p95 ${ms(pct(sorted, 95))}, p99 ${ms(pct(sorted, 99))}, max ${ms(sorted.at(-1)!)}`);
     console.log(`\nServer memory: RSS before uploads ${rssBefore.toFixed(0)} MB; peak (VmHWM) ${vm(pid, 'VmHWM').toFixed(0)} MB; highest sampled RSS ${rssPeakSampled.toFixed(0)} MB`);
     console.log('Targets: health p99 < 50 ms, each photo < 4 s, peak < 1024 MB.');

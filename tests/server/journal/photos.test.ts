@@ -58,6 +58,7 @@ describe('uploading photos to an entry', () => {
     // Smaller than 1600 px: kept at its own size, never enlarged.
     expect([p.width, p.height]).toEqual([300, 200]);
     expect(p.alt).toBe('Body — 25 Nov 2026');
+    expect(res.headers['server-timing']).toMatch(/^queue;dur=\d+, resize;dur=\d+$/);
     // The name a person gave the file appears nowhere on disk.
     const files = filesUnder(t.env.uploadsDir);
     expect(files.some((f) => f.includes('rnd-12'))).toBe(false);
