@@ -97,7 +97,7 @@ export default function ProjectRoute() {
           </div>
           {p.patternCredit ? (
             <p className="flex items-start gap-1.5 text-sm">
-              <BookOpen aria-hidden className="mt-0.5 h-4 w-4 shrink-0 text-moss" />
+              <BookOpen aria-hidden className="mt-0.5 h-4 w-4 shrink-0 text-moss dark:text-[#9cc3a8]" />
               <span>
                 From{' '}
                 {p.patternId ? (

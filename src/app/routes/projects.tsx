@@ -66,7 +66,7 @@ export default function ProjectsRoute() {
                       </p>
                     ) : null}
                   </div>
-                  <ChevronRight aria-hidden className="h-6 w-6 shrink-0 text-moss" />
+                  <ChevronRight aria-hidden className="h-6 w-6 shrink-0 text-moss dark:text-[#9cc3a8]" />
                 </Card>
               </Link>
             </li>
@@ -83,7 +83,7 @@ export default function ProjectsRoute() {
         to={paths.yarnShelf}
         className="mt-8 flex min-h-tap items-center gap-3 rounded-soft bg-wool/60 px-4 py-3 font-semibold hover:bg-wool dark:bg-white/5 dark:hover:bg-white/10"
       >
-        <Library aria-hidden className="h-5 w-5 text-moss" />
+        <Library aria-hidden className="h-5 w-5 text-moss dark:text-[#9cc3a8]" />
         <span className="flex-1">
           Yarn shelf
           <span className="block text-sm font-normal text-ink/70 dark:text-oat/70">Your yarns and how much is left</span>

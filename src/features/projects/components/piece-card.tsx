@@ -47,23 +47,26 @@ export function PieceCard({
 }) {
   const check = useMemo(() => checkPiece(piece.instructions, { terms }), [piece.instructions, terms]);
   const marks = useMemo<SilhouetteMark[]>(() => {
-    const seen = new Set<string>();
-    const recorded = piece.placements
-      .map((p) => ({ round: p.round, label: p.label }))
-      .filter((m) => {
-        const key = `${m.round}|${m.label}`;
-        if (seen.has(key)) return false;
-        seen.add(key);
-        return true;
-      });
-    if (recorded.length) return recorded;
+    // One mark per round, naming everything placed there, so two eyes on Rnd 9 do not print over each other.
+    const byRound = (list: SilhouetteMark[]) => {
+      const grouped = new Map<number, string[]>();
+      for (const m of list) {
+        const labels = grouped.get(m.round) ?? [];
+        if (!labels.includes(m.label)) labels.push(m.label);
+        grouped.set(m.round, labels);
+      }
+      return [...grouped].map(([round, labels]) => ({ round, label: labels.join(', ') }));
+    };
+    if (piece.placements.length) return byRound(piece.placements.map((p) => ({ round: p.round, label: p.label })));
     // Nothing recorded yet: show where the pattern says parts go.
-    return check.notes.flatMap((n: Note) => {
-      const p = n.placement;
-      if (!p) return [];
-      const round = p.betweenRounds ? (p.betweenRounds[0] + p.betweenRounds[1]) / 2 : p.atRound;
-      return round == null ? [] : [{ round, label: p.label }];
-    });
+    return byRound(
+      check.notes.flatMap((n: Note) => {
+        const p = n.placement;
+        if (!p) return [];
+        const round = p.betweenRounds ? (p.betweenRounds[0] + p.betweenRounds[1]) / 2 : p.atRound;
+        return round == null ? [] : [{ round, label: p.label }];
+      }),
+    );
   }, [check.notes, piece.placements]);
   const fraction = pieceFraction(piece);
   const line = progressLine(piece);
@@ -84,7 +87,7 @@ export function PieceCard({
 
       <div>
         <p className="flex items-center gap-2 font-semibold tabular">
-          <Hash aria-hidden className="h-4 w-4 text-moss" />
+          <Hash aria-hidden className="h-4 w-4 text-moss dark:text-[#9cc3a8]" />
           {line}
         </p>
         <div
