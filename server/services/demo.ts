@@ -46,6 +46,24 @@ export async function seedDemo(db: Knex, logger?: Logger) {
       })),
     );
 
+    // The yarn shelf: what the demo maker owns; the project draws its plum and green from it.
+    const shelf = [
+      { name: 'Plum cotton', colour: 'plum', fibre: 'cotton', weight: 3, ply: '8 ply', meters_per_skein: 125, yards_per_skein: 137, skeins_owned: 2, notes: 'Soft, good stitch definition.' },
+      { name: 'Leaf cotton', colour: 'leaf green', fibre: 'cotton', weight: 3, ply: '8 ply', meters_per_skein: 125, yards_per_skein: 137, skeins_owned: 1, notes: null },
+      { name: 'Bark cotton', colour: 'brown', fibre: 'cotton', weight: 3, ply: '8 ply', meters_per_skein: 125, yards_per_skein: 137, skeins_owned: 0.5, notes: 'Leftover from the acorn set.' },
+      { name: 'Oat wool blend', colour: 'oatmeal', fibre: 'wool/acrylic', weight: 4, ply: '10 ply', meters_per_skein: 190, yards_per_skein: 208, skeins_owned: 3, notes: null },
+    ];
+    const shelfIds: number[] = [];
+    for (const y of shelf) {
+      const [{ id }] = await trx('yarns').insert({ owner_id: maker.id, ...y }).returning('id');
+      shelfIds.push(id);
+    }
+    const used = [40, 12, 3]; // meters so far, per pattern yarn
+    const projectMaterials = {
+      ...p.materials,
+      yarns: p.materials.yarns.map((y, i) => ({ ...y, shelfYarnId: shelfIds[i], metersUsed: used[i] })),
+    };
+
     const [{ id: projectId }] = await trx('projects')
       .insert({
         owner_id: maker.id,
@@ -57,7 +75,7 @@ export async function seedDemo(db: Knex, logger?: Logger) {
         started_on: '2026-11-24',
         recipient: 'my sister Ines',
         for_young_child: false,
-        materials: JSON.stringify(p.materials),
+        materials: JSON.stringify(projectMaterials),
         notes: 'Using the plum cotton from the yarn shelf. Eyes: 8 mm safety eyes.',
       })
       .returning('id');
