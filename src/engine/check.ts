@@ -41,10 +41,14 @@ class PieceReader {
   truncated = false;
   steps = 0;
 
+  /** Bound once: a round asks for it only when it starts in leftover loops. */
+  readonly leftoverOf: EvalEnv['leftover'];
+
   constructor(
     readonly terms: Terms,
     start: number,
   ) {
+    this.leftoverOf = this.leftover.bind(this);
     this.prev = start;
     this.prevName = start > 0 ? 'the start' : null;
   }
@@ -120,9 +124,7 @@ class PieceReader {
         warning(`'${label.label}' names ${plural(numbers.length, 'round', 'rounds')}, but the repeat covers ${rep.refs.length * rep.times}`, rep.col),
       );
     }
-    const before = parsed.notes.filter((n) => n.position === 'before');
-    const after = parsed.notes.filter((n) => n.position === 'after');
-    for (const n of before) this.addNote(idx, n.text);
+    for (const n of parsed.notes) if (n.position === 'before') this.addNote(idx, n.text);
 
     for (let j = 0; j < numbers.length; j++) {
       if (this.rounds.length >= MAX_ROUNDS) {
@@ -136,7 +138,7 @@ class PieceReader {
         prev: this.prev,
         prevName: this.prevName,
         name,
-        leftover: (node) => this.leftover(node),
+        leftover: this.leftoverOf,
         maxSteps: MAX_PIECE_STEPS - this.steps,
       };
       const problems: Problem[] = j === 0 ? [...lineProblems] : [];
@@ -206,7 +208,7 @@ class PieceReader {
       this.lastNumber = number;
       this.lastKind = kind;
     }
-    for (const n of after) this.addNote(idx, n.text);
+    for (const n of parsed.notes) if (n.position === 'after') this.addNote(idx, n.text);
   }
 
   line(idx: number, raw: string): void {

@@ -61,6 +61,66 @@ function isNum(e: El | undefined): boolean {
   return isTok(e) && e.k === 'num';
 }
 const tok = (e: El | undefined): Tok => e as Tok;
+
+// Predicates at module level: the engine runs on every keystroke, and closures made per call cost
+// (tsx and dev builds wrap each one to keep its name).
+function isRoundWord(e: El): boolean {
+  return isWord(e, 'rnd', 'row');
+}
+function isBracket(e: El): boolean {
+  return e.k === 'br';
+}
+function isStar(e: El): boolean {
+  return isP(e, '*');
+}
+function notStar(e: El): boolean {
+  return !isP(e, '*');
+}
+function notPunct(e: El): boolean {
+  return !(isTok(e) && e.k === 'p');
+}
+function notStatedPunct(e: El): boolean {
+  return !(isTok(e) && e.k === 'p' && (e.v === ':' || e.v === '=' || e.v === '.'));
+}
+function isStatedWord(e: El): boolean {
+  return isWord(e, 'st', 'total', 'in', 'all', 'made', 'around', 'each', 'now', 'remaining');
+}
+function isWordTok(t: Tok): boolean {
+  return t.k === 'word';
+}
+function tokV(t: Tok): string {
+  return t.v;
+}
+function isNumTok(t: Tok): boolean {
+  return t.k === 'num';
+}
+function isEqualsTok(t: Tok): boolean {
+  return t.k === 'p' && t.v === '=';
+}
+function isLoopWord(w: string): boolean {
+  return LOOP_WORDS.has(w);
+}
+function isFloBlo(w: string): boolean {
+  return w === 'flo' || w === 'blo';
+}
+const LEFT_WORDS = new Set(['left', 'leftover', 'unused', 'free', 'remaining', 'unworked', 'from']);
+function isLeftWord(w: string): boolean {
+  return LEFT_WORDS.has(w);
+}
+const ACTION_WORDS = new Set(['sk', 'rep', 'join', 'turn', 'mr', 'ring', 'leave', 'blo', 'flo', 'otherside', 'evenly', 'inc', 'dec']);
+function isActionWord(w: string): boolean {
+  return ACTION_WORDS.has(w);
+}
+const STITCHY_WORDS = new Set(['sk', 'rep', 'join', 'turn', 'mr', 'blo', 'flo']);
+function isWorkNode(n: Node): boolean {
+  return n.t === 'st' || n.t === 'group' || n.t === 'skip' || n.t === 'evenly';
+}
+function notLoopNode(n: Node): boolean {
+  return n.t !== 'loop';
+}
+function isDoingNode(n: Node): boolean {
+  return n.t !== 'loop' && n.t !== 'turn';
+}
 function isP(e: El | undefined, v: string): boolean {
   return isTok(e) && e.k === 'p' && e.v === v;
 }
@@ -151,6 +211,15 @@ class Reader {
     return undefined;
   }
 
+  /** Whether any of these words is a stitch (other than the noun "st"). */
+  anyStitchWord(words: string[]): boolean {
+    for (const v of words) {
+      if (v === 'st') continue;
+      if (stitchFor(v, this.terms) || stitchFor(v, this.other) || (this.terms === 'uk' && v === 'sc')) return true;
+    }
+    return false;
+  }
+
   isStitchWord(e: El | undefined): boolean {
     if (!isTok(e) || e.k !== 'word') return false;
     return (
@@ -224,7 +293,7 @@ function splitClauses(els: El[]): Clause[] {
     const e = els[i];
     // "rep Rnds 4 and 5", "Rnds 4, 5": a list of round numbers is one clause.
     const inRoundList = isTok(e) && (e.v === 'and' || e.v === ',' || e.v === '-') && isNum(els[i + 1]) && isNum(cur[cur.length - 1]) &&
-      cur.some((x) => isWord(x, 'rnd', 'row'));
+      cur.some(isRoundWord);
     if (inRoundList) {
       cur.push(e);
       continue;
@@ -245,8 +314,8 @@ function splitClauses(els: El[]): Clause[] {
 
 /** A bracket holding only a count: (30), [30], (30 sts), (30 sts total), (total: 30), (30 sc). */
 function statedOf(br: Br, r: Reader): number | null {
-  const els = br.els.filter((e) => !(isTok(e) && e.k === 'p' && (e.v === ':' || e.v === '=' || e.v === '.')));
-  if (!els.length || els.some((e) => e.k === 'br')) return null;
+  const els = br.els.filter(notStatedPunct);
+  if (!els.length || els.some(isBracket)) return null;
   let i = 0;
   if (isWord(els[0], 'total')) i = 1;
   if (!isNum(els[i])) return null;
@@ -254,7 +323,7 @@ function statedOf(br: Br, r: Reader): number | null {
   const rest = els.slice(i + 1);
   if (rest.length === 1 && r.isStitchWord(rest[0])) return n;
   if (rest.length >= 1 && isWord(rest[0], 'st') && isP(rest[1], ',')) return n;
-  const ok = rest.every((e) => isWord(e, 'st', 'total', 'in', 'all', 'made', 'around', 'each', 'now', 'remaining'));
+  const ok = rest.every(isStatedWord);
   return ok ? n : null;
 }
 
@@ -268,11 +337,12 @@ type BracketKind =
 
 function bracketKind(br: Br, r: Reader): BracketKind {
   const toks = flatToks(br.els);
-  const words = toks.filter((t) => t.k === 'word').map((t) => t.v);
-  if (words.includes('counts') || (toks.some((t) => t.k === 'p' && t.v === '=') && words.some((w) => r.isStitchWord({ k: 'word', v: w } as Tok)))) {
+  const wordToks = toks.filter(isWordTok);
+  const words = wordToks.map(tokV);
+  if (words.includes('counts') || (toks.some(isEqualsTok) && r.anyStitchWord(words))) {
     if (words.includes('not')) return { k: 'notcounts' };
     const asIdx = words.indexOf('as');
-    const after = toks.filter((t) => t.k === 'word').slice(asIdx >= 0 ? asIdx + 1 : 0);
+    const after = wordToks.slice(asIdx >= 0 ? asIdx + 1 : 0);
     for (const t of after) {
       if (t.v === 'st') return { k: 'counts', as: null };
       const e = r.stitch(t);
@@ -280,7 +350,7 @@ function bracketKind(br: Br, r: Reader): BracketKind {
     }
     return { k: 'counts', as: null };
   }
-  if (words.length && !toks.some((t) => t.k === 'num') && words.every((w) => LOOP_WORDS.has(w))) {
+  if (words.length && !toks.some(isNumTok) && words.every(isLoopWord)) {
     if (words.includes('blo')) return { k: 'loop', loop: 'blo' };
     if (words.includes('flo')) return { k: 'loop', loop: 'flo' };
     if (words.includes('both')) return { k: 'loop', loop: null };
@@ -294,7 +364,13 @@ function bracketKind(br: Br, r: Reader): BracketKind {
     const fill = readFill(br.els, 0);
     if (fill && fill.next === br.els.length) return { k: 'times', n: 0, more: false, ambiguous: false, fill: fill.leave };
   }
-  const stitchy = toks.some((t) => t.k === 'num' || (t.k === 'p' && t.v === '*') || r.isStitchWord(t) || ['sk', 'rep', 'join', 'turn', 'mr', 'blo', 'flo'].includes(t.v));
+  let stitchy = false;
+  for (const t of toks) {
+    if (t.k === 'num' || (t.k === 'p' && t.v === '*') || STITCHY_WORDS.has(t.v) || r.isStitchWord(t)) {
+      stitchy = true;
+      break;
+    }
+  }
   if (!stitchy) return { k: 'comment' };
   return { k: 'group' };
 }
@@ -840,7 +916,9 @@ function readGroup(c: Cursor, r: Reader, out: Item[], clauseLoop: Loop | null): 
 
 /** Words of a clause, for the whole-clause recognisers. */
 function clauseWords(els: El[]): string[] {
-  return els.filter((e): e is Tok => isTok(e) && e.k === 'word').map((t) => t.v);
+  const out: string[] = [];
+  for (const e of els) if (isTok(e) && e.k === 'word') out.push(e.v);
+  return out;
 }
 
 function readClause(cl: Clause, r: Reader, out: Item[], top: boolean): void {
@@ -852,14 +930,14 @@ function readClause(cl: Clause, r: Reader, out: Item[], top: boolean): void {
   let closeStar: { col: number; times: Times | null } | null = null;
   // In "rep from * …" the star names the repeat's start; it closes nothing.
   const startsRep = isWord(els[0], 'rep', 'work', 'as');
-  let starAt = startsRep ? -1 : els.findIndex((e) => isP(e, '*'));
+  let starAt = startsRep ? -1 : els.findIndex(isStar);
   if (starAt > 0 && els[starAt - 1].k === 'br' && isNum(els[starAt + 1])) {
     // "(2 sc, inc)*6": the star is a times sign.
     els = [...els.slice(0, starAt), { ...(els[starAt] as Tok), k: 'word', v: 'x' }, ...els.slice(starAt + 1)];
-    starAt = els.findIndex((e) => isP(e, '*'));
+    starAt = els.findIndex(isStar);
   }
   if (starAt >= 0) {
-    const after = els.slice(starAt + 1).filter((e) => !isP(e, '*'));
+    const after = els.slice(starAt + 1).filter(notStar);
     const tm = readTimes(after, 0);
     const fill = tm ? null : readFill(after, 0);
     closeStar = {
@@ -875,17 +953,18 @@ function readClause(cl: Clause, r: Reader, out: Item[], top: boolean): void {
 /** Replaces likely typos by the word they resemble (with a problem), so the count can carry on. */
 function correctTypos(els: El[], r: Reader): El[] {
   const known = KNOWN[r.terms];
-  let changed = false;
-  const outEls = els.map((e) => {
-    if (!isTok(e) || e.k !== 'word' || known.has(e.v)) return e;
+  let outEls: El[] | null = null;
+  for (let i = 0; i < els.length; i++) {
+    const e = els[i];
+    if (!isTok(e) || e.k !== 'word' || known.has(e.v)) continue;
     const s = suggest(e.v, r.terms);
-    if (!s) return e;
+    if (!s) continue;
     const shown = s === 'slst' ? 'sl st' : s === 'chsp' ? 'ch-sp' : s;
     r.problems.push(error(`'${e.raw}' — did you mean '${shown}'?`, e.col));
-    changed = true;
-    return { ...e, v: s };
-  });
-  return changed ? outEls : els;
+    outEls ??= [...els];
+    outEls[i] = { ...e, v: s };
+  }
+  return outEls ?? els;
 }
 
 function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[], top: boolean): void {
@@ -905,15 +984,21 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
   }
   const els = correctTypos(rawEls, r);
   const words = clauseWords(els);
-  const has = (w: string) => words.includes(w);
+
   const nums = els.filter(isNum).map(tok);
   const w0 = isTok(els[0]) && els[0].k === 'word' ? els[0].v : null;
 
   // Leftover loops: "working in the front loops left from Rnd 6", "in the unused back loops of Rnd 9".
-  const loopWord = words.find((w) => w === 'flo' || w === 'blo') as Loop | undefined;
-  const rndAt = els.findIndex((e, i) => isWord(e, 'rnd', 'row') && isNum(els[i + 1]));
-  if (loopWord && rndAt >= 0 && !words.some((w) => r.isStitchWord({ k: 'word', v: w } as Tok) && w !== 'st')) {
-    const left = words.some((w) => ['left', 'leftover', 'unused', 'free', 'remaining', 'unworked', 'from'].includes(w));
+  const loopWord = words.find(isFloBlo) as Loop | undefined;
+  let rndAt = -1;
+  for (let i = 0; i < els.length - 1; i++) {
+    if (isWord(els[i], 'rnd', 'row') && isNum(els[i + 1])) {
+      rndAt = i;
+      break;
+    }
+  }
+  if (loopWord && rndAt >= 0 && !r.anyStitchWord(words)) {
+    const left = words.some(isLeftWord);
     out.push({
       t: 'leftover',
       loop: loopWord,
@@ -925,7 +1010,7 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
     return;
   }
   // A loop marker on its own: "BLO", "working in back loops only", "(in BLO)".
-  if (words.length && !nums.length && words.every((w) => LOOP_WORDS.has(w)) && (loopWord || has('both'))) {
+  if (words.length && !nums.length && words.every(isLoopWord) && (loopWord || words.includes('both'))) {
     out.push({ t: 'loop', loop: loopWord ?? null, col });
     return;
   }
@@ -945,17 +1030,17 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
       return;
     }
   }
-  if (has('join') && has('not')) return; // "do not join": spiral rounds
-  if (has('join')) {
-    if (has('ring') || has('form')) out.push({ t: 'ring', col, formed: true });
+  if (words.includes('join') && words.includes('not')) return; // "do not join": spiral rounds
+  if (words.includes('join')) {
+    if (words.includes('ring') || words.includes('form')) out.push({ t: 'ring', col, formed: true });
     else out.push({ t: 'join', col });
     return;
   }
-  if (w0 === 'slst' && (has('form') && has('ring'))) {
+  if (w0 === 'slst' && (words.includes('form') && words.includes('ring'))) {
     out.push({ t: 'ring', col, formed: true });
     return;
   }
-  if (w0 === 'slst' && !nums.length && (has('first') || has('top') || has('beg'))) {
+  if (w0 === 'slst' && !nums.length && (words.includes('first') || words.includes('top') || words.includes('beg'))) {
     out.push({ t: 'join', col });
     return;
   }
@@ -963,29 +1048,35 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
     out.push({ t: 'turn', col });
     return;
   }
-  if (has('tail')) return;
-  if (has('leave') || (has('not') && has('work') && has('remaining'))) {
+  if (words.includes('tail')) return;
+  if (words.includes('leave') || (words.includes('not') && words.includes('work') && words.includes('remaining'))) {
     out.push({ t: 'leave', n: nums.length ? nums[0].n : null, col });
     return;
   }
-  if (w0 === 'not' && (has('join') || has('turn'))) return;
-  if (w0 === 'rep' || (w0 === 'work' && (has('as') || has('rep'))) || (w0 === 'as' && (has('rnd') || has('row')))) {
+  if (w0 === 'not' && (words.includes('join') || words.includes('turn'))) return;
+  if (w0 === 'rep' || (w0 === 'work' && (words.includes('as') || words.includes('rep'))) || (w0 === 'as' && (words.includes('rnd') || words.includes('row')))) {
     readRep(els, r, out, top, col);
     return;
   }
-  if (has('counts') && !(w0 && r.isStitchWord(els[0]))) {
-    annotateLastChain(r, has('not') ? { k: 'notcounts' } : { k: 'counts', as: null });
+  if (words.includes('counts') && !(w0 && r.isStitchWord(els[0]))) {
+    annotateLastChain(r, words.includes('not') ? { k: 'notcounts' } : { k: 'counts', as: null });
     return;
   }
-  if (has('otherside') && !(isNum(els[0]) || r.isStitchWord(els[0]) || w0 === 'inc' || w0 === 'dec')) {
+  if (words.includes('otherside') && !(isNum(els[0]) || r.isStitchWord(els[0]) || w0 === 'inc' || w0 === 'dec')) {
     out.push({ t: 'otherside', col });
     return;
   }
   // Comment: no number, no bracket, no stitch and no action word ("pulling tight", "stuff as you go").
-  const actiony = words.some((w) => ['sk', 'rep', 'join', 'turn', 'mr', 'ring', 'leave', 'blo', 'flo', 'otherside', 'evenly', 'inc', 'dec'].includes(w));
+  const actiony = words.some(isActionWord);
   // "… and in each ch across": the stitch carries over from the clause before.
   let inherit = r.lastSt && (sep === 'and' || sep === ',') && isWord(els[0], 'in', 'on', 'next', 'each') ? r.lastSt : null;
-  const stitchy = els.some((e) => e.k === 'br' || isNum(e) || r.isStitchWord(e));
+  let stitchy = false;
+  for (const e of els) {
+    if (e.k === 'br' || isNum(e) || r.isStitchWord(e)) {
+      stitchy = true;
+      break;
+    }
+  }
   if (!actiony && !stitchy && !inherit) {
     // One unknown word between stitches ("sc in next 5, xyzzy, sc in next 36") is most likely a stitch
     // Whorlbook does not know: counted as one, said once. Longer prose is a comment.
@@ -1216,22 +1307,14 @@ function isSetup(n: Node, at: number): boolean {
   return at === 0 && n.t === 'st' && n.entry.id === 'ch';
 }
 
+function starGroupOf(body: Node[], col: number, times: Times): GroupNode {
+  return { t: 'group', body, into: null, units: { u: 'n', n: 1 }, times, col, end: col, display: '*', loop: null, star: true };
+}
+
 /** Turns the flat list with star markers into nested repeat groups. */
 function nestStars(items: Item[], r: Reader): Node[] {
   const frames: Array<{ list: Node[]; col: number }> = [{ list: [], col: -1 }];
-  const top = () => frames[frames.length - 1];
-  const starGroup = (body: Node[], col: number, times: Times): GroupNode => ({
-    t: 'group',
-    body,
-    into: null,
-    units: { u: 'n', n: 1 },
-    times,
-    col,
-    end: col,
-    display: '*',
-    loop: null,
-    star: true,
-  });
+  const top = (): { list: Node[]; col: number } => frames[frames.length - 1];
   // A closed *…* waiting for its "rep" clause.
   let waiting: GroupNode | null = null;
   for (const it of items) {
@@ -1246,7 +1329,7 @@ function nestStars(items: Item[], r: Reader): Node[] {
           break;
         }
         const f = frames.pop()!;
-        const g = starGroup(f.list, f.col, it.times ?? { k: 'n', n: 1 });
+        const g = starGroupOf(f.list, f.col, it.times ?? { k: 'n', n: 1 });
         top().list.push(g);
         waiting = it.times ? null : g;
         break;
@@ -1255,7 +1338,7 @@ function nestStars(items: Item[], r: Reader): Node[] {
       case 'reptimes': {
         if (it.t === 'repfrom' && frames.length >= 2) {
           const f = frames.pop()!;
-          top().list.push(starGroup(f.list, f.col, it.times));
+          top().list.push(starGroupOf(f.list, f.col, it.times));
         } else if (waiting) {
           waiting.times = it.times;
           waiting = null;
@@ -1271,7 +1354,7 @@ function nestStars(items: Item[], r: Reader): Node[] {
             while (from < list.length && isSetup(list[from], from)) from++;
             if (from < list.length) {
               const body = list.splice(from);
-              list.push({ ...starGroup(body, body[0].t === 'st' || body[0].t === 'group' ? body[0].col : it.col, it.times), star: false });
+              list.push({ ...starGroupOf(body, body[0].t === 'st' || body[0].t === 'group' ? body[0].col : it.col, it.times), star: false });
             } else {
               r.problems.push(error('There is nothing before this repeat to repeat', it.col));
               r.uncertain = true;
@@ -1305,26 +1388,47 @@ function readSeq(els: El[], r: Reader, top: boolean): Node[] {
   return nodes;
 }
 
-function walk(nodes: Node[], f: (n: Node) => void): void {
+function hasFromHook(nodes: Node[]): boolean {
   for (const n of nodes) {
-    f(n);
-    if (n.t === 'group') walk(n.body, f);
+    if (n.t === 'st' && n.into.t === 'fromHook') return true;
+    if (n.t === 'group' && hasFromHook(n.body)) return true;
+  }
+  return false;
+}
+
+/** Chains inside repeats are chain stitches unless they say otherwise. */
+function defaultChains(nodes: Node[]): void {
+  for (const n of nodes) {
+    if (n.t === 'st' && n.entry.id === 'ch' && !n.role && !n.roleAlt) n.role = 'chains';
+    if (n.t === 'st' && n.role === 'counts' && !n.countsAs) n.countsAs = STITCH_BY_ID.get('dc');
+    if (n.t === 'group') defaultChains(n.body);
+  }
+}
+
+/** "dc in 4th ch from hook": do the skipped chains count as a stitch? Settled by the count. */
+function markSkippedChains(nodes: Node[], r: Reader): void {
+  for (const n of nodes) {
+    if (n.t === 'st' && n.into.t === 'fromHook' && n.into.nth >= 3) n.skippedCountAlt = { id: r.alt(2), defaultCounts: n.into.nth >= 4 };
+    if (n.t === 'group') markSkippedChains(n.body, r);
   }
 }
 
 /** Decides what each chain is for: turning, counting as a stitch, chain stitches, foundation or ring. */
 function settleChains(nodes: Node[], r: Reader, top: boolean): void {
-  const isWork = (n: Node) => n.t === 'st' || n.t === 'group' || n.t === 'skip' || n.t === 'evenly';
-  let hasFromHook = false;
-  walk(nodes, (n) => {
-    if (n.t === 'st' && n.into.t === 'fromHook') hasFromHook = true;
-  });
-  const firstIdx = nodes.findIndex(isWork);
+  const fromHook = hasFromHook(nodes);
+  const firstIdx = nodes.findIndex(isWorkNode);
   for (let i = 0; i < nodes.length; i++) {
     const n = nodes[i];
     if (n.t !== 'st' || n.entry.id !== 'ch') continue;
-    const next = nodes.slice(i + 1).find((m) => m.t !== 'loop');
-    const laterWork = nodes.slice(i + 1).some(isWork);
+    let next: Node | undefined;
+    let laterWork = false;
+    for (let j = i + 1; j < nodes.length; j++) {
+      if (!next && notLoopNode(nodes[j])) next = nodes[j];
+      if (isWorkNode(nodes[j])) {
+        laterWork = true;
+        break;
+      }
+    }
     if (next && next.t === 'ring' && next.formed) {
       n.role = 'ring';
       continue;
@@ -1335,14 +1439,13 @@ function settleChains(nodes: Node[], r: Reader, top: boolean): void {
     }
     const count = n.units.u === 'n' ? n.units.n : 1;
     if (top && i === firstIdx) {
-      if (hasFromHook) n.role = 'foundation';
+      if (fromHook) n.role = 'foundation';
       else if (!laterWork) n.role = 'chains';
       else if (count === 1) n.role = 'turning';
       else if (next && next.t === 'skip') {
         // "ch 4, sk 4, …" makes a gap of 4 chains; read as a turning chain when the count says so.
         n.roleAlt = { id: r.alt(2), options: ['chains', 'turning'] };
-      }
-      else {
+      } else {
         const options: ChainRole[] = count >= 3 ? ['counts', 'turning'] : ['turning', 'counts'];
         n.roleAlt = { id: r.alt(2), options };
         n.countsAs = STITCH_BY_ID.get(STARTS_COUNTS_AS[count] ?? 'dc');
@@ -1350,18 +1453,8 @@ function settleChains(nodes: Node[], r: Reader, top: boolean): void {
     } else if (top && !laterWork && next && next.t === 'turn') n.role = 'turning';
     else n.role = 'chains';
   }
-  // Chains inside repeats are chain stitches unless they say otherwise.
-  walk(nodes, (n) => {
-    if (n.t === 'st' && n.entry.id === 'ch' && !n.role && !n.roleAlt) n.role = 'chains';
-    if (n.t === 'st' && n.role === 'counts' && !n.countsAs) n.countsAs = STITCH_BY_ID.get('dc');
-  });
-  if (top) {
-    walk(nodes, (n) => {
-      if (n.t === 'st' && n.into.t === 'fromHook' && n.into.nth >= 3) {
-        n.skippedCountAlt = { id: r.alt(2), defaultCounts: n.into.nth >= 4 };
-      }
-    });
-  }
+  defaultChains(nodes);
+  if (top) markSkippedChains(nodes, r);
 }
 
 // ───────────────────────── entry point ─────────────────────────
@@ -1373,12 +1466,15 @@ function takeStated(els: El[], r: Reader): { stated: number | null; col: number 
     if (e.k === 'br') {
       const n = statedOf(e, r);
       if (n !== null) {
-        const tail = els.slice(i + 1).filter((x) => !(isTok(x) && x.k === 'p') && !(x.k === 'br' && bracketKind(x, r).k === 'comment'));
-        return { stated: n, col: e.col, cut: i, trailingFrom: tail.length ? i + 1 : null };
+        let tail = 0;
+        for (const x of els.slice(i + 1)) if (notPunct(x) && !(x.k === 'br' && bracketKind(x, r).k === 'comment')) tail++;
+        return { stated: n, col: e.col, cut: i, trailingFrom: tail ? i + 1 : null };
       }
       // Only the last bracket can be the count; an earlier one would leave instructions after it.
       const after = els.slice(i + 1);
-      if (after.some((x) => x.k === 'br' || isNum(x) || r.isStitchWord(x))) break;
+      let instructions = false;
+      for (const x of after) if (x.k === 'br' || isNum(x) || r.isStitchWord(x)) instructions = true;
+      if (instructions) break;
     }
   }
   // Dash or equals form at the very end.
@@ -1425,7 +1521,7 @@ function parseUncached(text: string, from: number, terms: Terms): Parsed {
   if (st.trailingFrom !== null) {
     const tail = tree.slice(st.trailingFrom);
     const tailText = r.slice(firstCol(tail), text.length).replace(/^[.,;:\s]+/, '');
-    const firstTail = tail.find((e) => !(isTok(e) && e.k === 'p'));
+    const firstTail = tail.find(notPunct);
     const instructiony = firstTail && (isWord(firstTail, 'turn', 'join', 'ch', 'slst') || (isTok(firstTail) && firstTail.v === 'not'));
     if (instructiony && classifyNote(tailText).kind === 'other') body.push({ k: 'p', v: ',', n: 0, col: firstCol(tail), end: firstCol(tail), raw: ',' }, ...tail);
     else if (tailText) r.notes.push({ text: tailText, col: firstCol(tail), position: 'after' });
@@ -1438,7 +1534,7 @@ function parseUncached(text: string, from: number, terms: Terms): Parsed {
     r.problems.push(error('Whorlbook could not read this line', from));
     r.uncertain = true;
   }
-  const hasWork = nodes.some((n) => n.t !== 'loop' && n.t !== 'turn');
+  const hasWork = nodes.some(isDoingNode);
   const startCol = body.length ? firstCol(body) : from;
   return {
     nodes,
