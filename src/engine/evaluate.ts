@@ -284,6 +284,12 @@ class Walker {
     const e = n.entry;
     if (e.id === 'ch') return this.chain(n, loop);
     if (n.into.t === 'ring' && this.base !== 'ring') this.enterRing('mr');
+    if (e.id === 'sl st' && n.into.t === 'next' && n.units.u === 'n' && n.units.n === 1 && n.per === 1 && this.base === 'prev' && this.pool > 0 && this.pos >= this.pool) {
+      // "…, sl st in next st, fasten off" after the round is complete: the slip stitch goes into the
+      // first stitch of this round to finish the edge and is not counted (common practice).
+      this.step('sl st', `${this.abbr(e)} in the next stitch to finish (not counted)`, 0, 0, loop, n.col);
+      return;
+    }
     const wpuFirst = this.worksPer(n.into, e, n.col);
     const count = this.unitCount(n.units, wpuFirst || e.works, n.word, n.col);
     const madeKey = n.incOf ? n.incOf.madeAs : e.madeAs;

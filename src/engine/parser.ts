@@ -1036,11 +1036,13 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
     else out.push({ t: 'join', col });
     return;
   }
-  if (w0 === 'slst' && (words.includes('form') && words.includes('ring'))) {
+  // The slip stitch by any spelling ("sl st", UK "ss").
+  const slipFirst = w0 !== null && (stitchFor(w0, r.terms)?.id === 'sl st' || stitchFor(w0, r.other)?.id === 'sl st');
+  if (slipFirst && (words.includes('form') && words.includes('ring'))) {
     out.push({ t: 'ring', col, formed: true });
     return;
   }
-  if (w0 === 'slst' && !nums.length && (words.includes('first') || words.includes('top') || words.includes('beg'))) {
+  if (slipFirst && !nums.length && (words.includes('first') || words.includes('top') || words.includes('beg'))) {
     out.push({ t: 'join', col });
     return;
   }

@@ -373,3 +373,41 @@ describe('UK terms', () => {
     expect(start.made).toEqual({ dc: 12 });
   });
 });
+
+describe('ways designers write the same thing', () => {
+  it.each([
+    ['Rnd 1: In a magic ring, work 6 sc (6)', 0, 6],
+    ['Rnd 1: 6 sc in MR, do not join (6)', 0, 6],
+    ["Rnd 1: 6 sc in MR; don't join, work in continuous rounds (6)", 0, 6],
+    ['Rnd 3: *1 sc, 1 inc* 6 times (18)', 12, 18],
+    ['Rnd 4: (2sc, inc)*6 (24)', 18, 24],
+    ['Rnd 5: sc 3, inc (repeat 6 times) (30)', 24, 30],
+    ['Rnd 4: sc in next 2 sts, 2 sc in next st, repeat 5 times (24)', 18, 24],
+    ['Rnd 5: *sc in next 3 sts, inc in next st* repeat 6 times (30)', 24, 30],
+    ['Rnd 15: 2 sc in the next stitch, 1 sc in each of the next 2 stitches; repeat 5 more times (24)', 18, 24],
+    ['Rnds 7-10: sc in each st around (36 sts) (4 rnds)', 36, 36],
+    ['Rnd 2: ch 1, 2 sc in same st as ch 1, 2 sc in each st around, join (12)', 6, 12],
+    ['Rnd 9: sc in each st around, pulling tight (18)', 18, 18],
+    ['Rnd 11: sc in the back loop of each st around (18)', 18, 18],
+    ['Rnd 14: [sc 3, dec] repeat around (24)', 30, 24],
+    ['Rnd 16: sc 2, inc, [sc 3, inc] x5, sc (30)', 24, 30],
+    ['Row 3: Ch 2 (counts as first hdc), hdc in each st across (10)', 10, 10],
+    ['Row 4: ch 3 (counts as dc here and throughout), dc in each remaining st (10)', 10, 10],
+    // A last slip stitch into the round just made finishes the edge and is not counted (common practice).
+    ['Rnd 18: dec x6, sl st in next st, fasten off (6)', 12, 6],
+  ])('%s', (text, start, stitches) => {
+    const c = checkPiece(text, { start });
+    expect(c.rounds.map((r) => [r.stitches, r.problems.map((p) => p.message)])).toEqual(c.rounds.map(() => [stitches, []]));
+    expect(c.rounds.length).toBeGreaterThan(0);
+  });
+
+  it('a UK slip-stitch join makes no stitch', () => {
+    clean('Rnd 1: 6 dc in MR, ss in first dc (6)', 0, 6, 0, 'uk');
+  });
+
+  it('a note inside a round line goes to the notes, not the count', () => {
+    const c = checkPiece('Rnd 10: sc in each st around; stuff as you go (18)', { start: 18 });
+    expect(c.rounds[0]).toMatchObject({ stitches: 18, problems: [] });
+    expect(c.notes.map((n) => [n.text, n.kind])).toEqual([['stuff as you go', 'stuffing']]);
+  });
+});
