@@ -424,3 +424,31 @@ describe('chain spaces', () => {
     ]);
   });
 });
+
+describe('more forms', () => {
+  it.each([
+    ['Rnd 4: {2 sc, inc} x6 (24)', 18, 24],
+    ['Rnd 4: (sc, ch 2, sc) in each st around (24)', 6, 24],
+    ['Rnd 4: 2 sc in next 3 sts, sc in next 3 sts (9)', 6, 9],
+    ['Rnd 4: sc next 2 sts tog x3 (3)', 6, 3],
+    ['Rnd 4: 6sc, 3scs (9)', 9, 9],
+    ['Rnd 4: sc in each st to end, 30 sts.', 30, 30],
+    ['Rnd 4: FPdc in next 6 sts, BPdc in next 6 sts (12)', 12, 12],
+  ])('%s', (text, start, stitches) => {
+    const r = checkPiece(text, { start }).rounds[0];
+    expect([r.stitches, r.problems.map((p) => p.message)]).toEqual([stitches, []]);
+  });
+
+  it('as Rnd 8, and an unlabelled "Repeat Rnds … more times"', () => {
+    const c = checkPiece('Rnd 8: sc around (24)\nRnd 9: as Rnd 8\nRnd 10: (3 sc, inc) x6 (30)\nRnd 11: sc around (30)\nRepeat Rnds 11-11 three more times.', { start: 24 });
+    expect(c.rounds.map((r) => [r.number, r.label, r.stitches, r.problems.length])).toEqual([
+      [8, 'Rnd 8', 24, 0],
+      [9, 'Rnd 9', 24, 0],
+      [10, 'Rnd 10', 30, 0],
+      [11, 'Rnd 11', 30, 0],
+      [12, 'Rnd 12', 30, 0],
+      [13, 'Rnd 13', 30, 0],
+      [14, 'Rnd 14', 30, 0],
+    ]);
+  });
+});
