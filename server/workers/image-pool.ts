@@ -9,7 +9,7 @@ import type { ImageJob, ImageResult } from './image.js';
 // second core and double the peak past our 1 GB budget. One thread keeps /api/health fast and memory
 // bounded, and photos simply queue. niceIncrement lowers the worker's scheduling priority so the request
 // thread always wins a core when it wakes up. Measured with tests/bench/photos.ts (three 12 MP photos at
-// once, machine shared with other work): 1 thread peaked at 663 MB with /api/health p99 32–41 ms;
+// once, machine shared with other work): 1 thread peaked at 644–699 MB with /api/health p99 32–58 ms;
 // 2 threads peaked at 1043 MB with p99 105–132 ms and finished no sooner.
 export const IMAGE_THREADS = 1;
 /** Jobs waiting or running before new uploads are refused with 503; at least one full batch of 8 fits. */
