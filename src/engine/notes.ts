@@ -19,7 +19,7 @@ const STUFF = /\b(stuff(?:ed|ing)?|fill(?:ing)?\s+(?:firmly|with))\b/i;
 const COLOUR_NAMES =
   'white|black|red|pink|rose|blue|navy|green|mint|sage|yellow|mustard|orange|purple|lilac|lavender|brown|tan|grey|gray|beige|cream|ivory|oat|gold|silver|teal|coral|peach';
 const COLOUR_WORDS = new RegExp(
-  String.raw`\b(colou?rs?|mc|cc\d?|contrast(?:ing)?\s+colou?r|new\s+yarn)\b|\b(?:change|switch|swap)\s+(?:yarn\s+)?to\s+(?:${COLOUR_NAMES})\b|^\s*(?:with|using|in)\s+(?:${COLOUR_NAMES}|mc|cc)\b|\bjoin\s+(?:${COLOUR_NAMES}|new)\b|\b(?:${COLOUR_NAMES})\s+yarn\b`,
+  String.raw`\b(colou?rs?|mc|cc\d?|contrast(?:ing)?\s+colou?r|new\s+yarn)\b|\b(?:change|switch|swap)\s+(?:yarn\s+)?to\s+(?:${COLOUR_NAMES})\b|^\s*(?:with|using|in)\s+(?:${COLOUR_NAMES}|mc|cc)\b|\bjoin\s+(?:${COLOUR_NAMES}|new)\b|\b(?:${COLOUR_NAMES})\s+yarn\b|^\s*(?:with|using|in|change\s+to|switch\s+to)\s+(?:the\s+)?(?:[a-z]+\s+){0,2}yarn\b`,
   'i',
 );
 // A colour named by a capital letter ("Change to B", "With A, …"): case matters, or "in a st" would match.

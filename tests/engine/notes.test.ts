@@ -8,6 +8,8 @@ describe('note kinds', () => {
     ['Change colour to pink', 'colour'],
     ['With B, continue', 'colour'],
     ['Join yellow yarn', 'colour'],
+    ['With plum yarn:', 'colour'],
+    ['Change to the bark yarn', 'colour'],
     ['Switch to a 3 mm hook', 'hook'],
     ['change to 2.5mm hook', 'hook'],
     ['Use a G-6 hook from here', 'hook'],
