@@ -562,7 +562,8 @@ export function evaluate(parsed: Parsed, env: EvalEnv, opts: { nodes?: Node[]; i
 
 function finish(w: Walker, env: EvalEnv, parsed: Parsed): EvalResult {
   const worked = w.offset + w.pos;
-  const stitches = w.steps.reduce((s, st) => s + st.makes, 0);
+  let stitches = 0;
+  for (const st of w.steps) stitches += st.makes;
   const problems = w.problems;
   const name = env.name;
   const endCol = parsed.endCol;

@@ -73,9 +73,14 @@ export function lex(text: string, offset = 0): Tok[] {
         break;
       }
       let raw = text.slice(i, j);
-      while (raw.endsWith("'") || raw.endsWith('’')) raw = raw.slice(0, -1);
-      const lower = raw.toLowerCase().replace(/['’]/g, '');
-      out.push({ k: 'word', v: lower, n: 0, col: i + offset, end: i + raw.length + offset, raw: raw.toLowerCase() });
+      let lowerRaw = raw.toLowerCase();
+      let lower = lowerRaw;
+      if (raw.includes("'") || raw.includes('’')) {
+        while (raw.endsWith("'") || raw.endsWith('’')) raw = raw.slice(0, -1);
+        lowerRaw = raw.toLowerCase();
+        lower = lowerRaw.replace(/['’]/g, '');
+      }
+      out.push({ k: 'word', v: lower, n: 0, col: i + offset, end: i + raw.length + offset, raw: lowerRaw });
       i = j;
       continue;
     }

@@ -179,7 +179,8 @@ class Reader {
   }
 
   slice(from: number, to: number): string {
-    return this.line.slice(from, to).replace(/\s+/g, ' ').trim();
+    const s = this.line.slice(from, to);
+    return /\s\s|[\t\n\r]/.test(s) ? s.replace(/\s+/g, ' ').trim() : s.trim();
   }
 
   alt(options: number): number {
@@ -492,6 +493,13 @@ function readNoun(c: Cursor, r: Reader): Tok | null {
   return null;
 }
 
+/** "next ch-3 sp" → a space of 3 chains; "next sp" → a space of unknown size (one). */
+function spaceFrom(noun: Tok | null): Into | null {
+  if (noun && noun.v === 'chsp') return { t: 'space', size: noun.n || 1 };
+  if (noun && noun.v === 'sp') return { t: 'space', size: 1 };
+  return null;
+}
+
 function readTarget(c: Cursor, r: Reader): Target | null {
   const start = c.i;
   const tg: Target = { into: { t: 'next' }, units: { u: 'n', n: 1 }, explicitCount: false, each: false, tog: false, otherSide: false, loop: null, bare: false };
@@ -507,8 +515,6 @@ function readTarget(c: Cursor, r: Reader): Target | null {
     if (isWord(c.el, 'in', 'on')) c.i++;
   }
   const e = c.el;
-  const spaceFrom = (noun: Tok | null): Into | null =>
-    noun && noun.v === 'chsp' ? { t: 'space', size: noun.n || 1 } : noun && noun.v === 'sp' ? { t: 'space', size: 1 } : null;
   if (isWord(e, 'next', 'first', 'last')) {
     c.i++;
     let n = 1;
@@ -972,10 +978,10 @@ function correctTypos(els: El[], r: Reader): El[] {
 function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[], top: boolean): void {
   const col = firstCol(rawEls);
   const end = lastEnd(rawEls);
-  const raw = r.slice(col, end);
   const first = rawEls[0];
   // Notes inside a round: "with color B, sc around", "…, stuff as you go", "fasten off".
   if (top && isTok(first) && first.k === 'word' && !r.isStitchWord(first) && !isWord(first, 'inc', 'dec', 'ch', 'sk', 'rep', 'mr')) {
+    const raw = r.slice(col, end);
     const reading = classifyNote(raw);
     const actionFirst = isWord(first, 'join', 'leave');
     if ((reading.kind !== 'other' && (!actionFirst || reading.kind === 'colour' || reading.kind === 'fasten-off')) ||
@@ -1327,7 +1333,6 @@ function starGroupOf(body: Node[], col: number, times: Times): GroupNode {
 /** Turns the flat list with star markers into nested repeat groups. */
 function nestStars(items: Item[], r: Reader): Node[] {
   const frames: Array<{ list: Node[]; col: number }> = [{ list: [], col: -1 }];
-  const top = (): { list: Node[]; col: number } => frames[frames.length - 1];
   // A closed *…* waiting for its "rep" clause.
   let waiting: GroupNode | null = null;
   for (const it of items) {
@@ -1343,7 +1348,7 @@ function nestStars(items: Item[], r: Reader): Node[] {
         }
         const f = frames.pop()!;
         const g = starGroupOf(f.list, f.col, it.times ?? { k: 'n', n: 1 });
-        top().list.push(g);
+        frames[frames.length - 1].list.push(g);
         waiting = it.times ? null : g;
         break;
       }
@@ -1351,12 +1356,12 @@ function nestStars(items: Item[], r: Reader): Node[] {
       case 'reptimes': {
         if (it.t === 'repfrom' && frames.length >= 2) {
           const f = frames.pop()!;
-          top().list.push(starGroupOf(f.list, f.col, it.times));
+          frames[frames.length - 1].list.push(starGroupOf(f.list, f.col, it.times));
         } else if (waiting) {
           waiting.times = it.times;
           waiting = null;
         } else {
-          const list = top().list;
+          const list = frames[frames.length - 1].list;
           const last = list[list.length - 1];
           if (it.t === 'reptimes' && last && last.t === 'group' && !last.into && last.times.k === 'n' && last.times.n === 1) {
             last.times = it.times;
@@ -1380,14 +1385,14 @@ function nestStars(items: Item[], r: Reader): Node[] {
         break;
       }
       default:
-        top().list.push(it);
+        frames[frames.length - 1].list.push(it);
         if (it.t !== 'loop' && it.t !== 'turn' && it.t !== 'join') waiting = null;
     }
   }
   while (frames.length > 1) {
     const f = frames.pop()!;
     r.problems.push(warning("The repeat that starts at this '*' is never repeated", f.col));
-    top().list.push(...f.list);
+    frames[frames.length - 1].list.push(...f.list);
   }
   return frames[0].list;
 }
