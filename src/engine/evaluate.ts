@@ -65,7 +65,7 @@ class Walker {
   chainPool: number | null = null;
   foundationLen: number | null = null;
   steps: Step[] = [];
-  made: Record<string, number> = {};
+  made = new Map<string, number>();
   loops = new Set<Loop>();
   loopMode: Loop | null = null;
   problems: Problem[] = [];
@@ -125,7 +125,7 @@ class Walker {
   }
 
   addMade(key: string, n: number): void {
-    if (n) this.made[key] = (this.made[key] ?? 0) + n;
+    if (n) this.made.set(key, (this.made.get(key) ?? 0) + n);
   }
 
   remaining(): number {
@@ -610,5 +610,7 @@ function finish(w: Walker, env: EvalEnv, parsed: Parsed): EvalResult {
     problems.push(error(`${name} says to leave ${w.leave.n} unworked, but none are left`, w.leave.col));
     w.clean = false;
   }
-  return { steps: w.steps, made: w.made, loops: [...w.loops], worked, stitches, problems, clean: w.clean };
+  const made: Record<string, number> = {};
+  for (const [k, v] of w.made) made[k] = v;
+  return { steps: w.steps, made, loops: [...w.loops], worked, stitches, problems, clean: w.clean };
 }
