@@ -40,6 +40,8 @@ class PieceReader {
   telltales = new Set<string>();
   truncated = false;
   steps = 0;
+  /** The line being read was cut at MAX_LINE characters. */
+  cut = false;
 
   /** Bound once: a round asks for it only when it starts in leftover loops. */
   readonly leftoverOf: EvalEnv['leftover'];
@@ -108,6 +110,7 @@ class PieceReader {
     const shownLabel = label ? label.label : foundation ? 'Foundation chain' : `${noun === 'Row' ? 'Row' : 'Rnd'} ${numbers[0]}`;
 
     const lineProblems: Problem[] = [...(label?.problems ?? []), ...parsed.problems];
+    if (this.cut) lineProblems.unshift(warning(`This line is longer than ${MAX_LINE} characters; only the first ${MAX_LINE} are read`, MAX_LINE));
     // Numbering: a new part starts again at 1; anything else should follow on.
     if (label && this.rounds.length) {
       const n0 = numbers[0];
@@ -213,7 +216,8 @@ class PieceReader {
 
   line(idx: number, raw: string): void {
     let line = raw;
-    if (line.length > MAX_LINE) line = line.slice(0, MAX_LINE);
+    this.cut = line.length > MAX_LINE;
+    if (this.cut) line = line.slice(0, MAX_LINE);
     if (!/[\p{L}\p{N}]/u.test(line)) return;
     const label = readLabel(line);
     if (label) {

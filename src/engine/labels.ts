@@ -66,6 +66,7 @@ export function readLabel(line: string): Label | null {
     } else numbers.push(n);
     last = n;
   }
+  if (numbers.length > MAX_RANGE) numbers.length = MAX_RANGE;
   const bracket = (m[5] ?? '').toLowerCase();
   const loop: Loop | null = /\b(blo|bl|back loops?)\b/.test(bracket) ? 'blo' : /\b(flo|fl|front loops?)\b/.test(bracket) ? 'flo' : null;
   return {

@@ -452,3 +452,19 @@ describe('more forms', () => {
     ]);
   });
 });
+
+describe('limits', () => {
+  it('a line past 4000 characters is read in part, and says so', () => {
+    const r = checkPiece('Rnd 2: ' + 'sc, '.repeat(1500), { start: 3000 }).rounds[0];
+    expect(r.problems[0]).toMatchObject({ severity: 'warning', message: 'This line is longer than 4000 characters; only the first 4000 are read' });
+  });
+  it('a range past 1000 rounds is cut, and says so', () => {
+    const c = checkPiece('Rnds 1-5000: sc around', { start: 6 });
+    expect(c.rounds).toHaveLength(1000);
+    expect(c.rounds[0].problems.map((p) => p.message)).toContain("'Rnds 1-5000' spans more than 1000 rounds; only the first 1000 are read");
+  });
+  it('a repeat too long to count is one problem, not a hang', () => {
+    const r = checkPiece('Rnd 2: (sc, inc) x99999', { start: 6 }).rounds[0];
+    expect(r.problems.map((p) => p.message)).toEqual(['Round 2 is too long to count (more than 20000 steps); check the repeat counts']);
+  });
+});
