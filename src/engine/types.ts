@@ -47,7 +47,7 @@ export interface Round {
   worked: number;
   /** Count stated at the end of the line, or null. */
   stated: number | null;
-  /** Stitches made by type in US abbreviations, e.g. { sc: 18, inc: 6 } counts made stitches per base type: { sc: 24 }. */
+  /** Stitches made by type in US abbreviations, e.g. { sc: 18, hdc: 6 }. An inc counts as 2 of its base stitch, a dec/invdec as one sc2tog. */
   made: Record<string, number>;
   loops: Loop[];
   steps: Step[];
