@@ -45,7 +45,7 @@ export function SignInForm() {
       {demo.data ? (
         <Banner tone="info" title="Trying Whorlbook? Use the demo maker">
           <p>
-            E-mail <code className="font-semibold">{demo.data.email}</code>, password <code className="font-semibold">{demo.data.password}</code>
+            E-mail <code className="font-sans font-bold">{demo.data.email}</code>, password <code className="font-sans font-bold">{demo.data.password}</code>
           </p>
           <Button
             variant="quiet"

@@ -17,7 +17,7 @@ const components: Components = {
   h3: ({ children }) => <p className="mb-1 font-bold">{children}</p>,
   h4: ({ children }) => <p className="mb-1 font-bold">{children}</p>,
   blockquote: ({ children }) => <blockquote className="mb-2 border-l-4 border-wool pl-3 italic">{children}</blockquote>,
-  code: ({ children }) => <code className="rounded bg-wool px-1 font-mono text-sm dark:bg-[#3a3430]">{children}</code>,
+  code: ({ children }) => <code className="rounded bg-wool px-1 font-sans font-semibold text-sm dark:bg-[#3a3430]">{children}</code>,
 };
 
 export function MarkdownBody({ text }: { text: string }) {

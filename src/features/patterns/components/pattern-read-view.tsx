@@ -25,7 +25,7 @@ function PieceRead({ piece, pattern }: { piece: PatternPiece; pattern: Pattern }
       <div className="grid gap-4 lg:grid-cols-2">
         <pre
           aria-label={`${piece.name} instructions`}
-          className="overflow-x-auto rounded-soft bg-oat px-4 py-3 font-mono text-[0.95rem] leading-6 whitespace-pre-wrap dark:bg-ink"
+          className="overflow-x-auto rounded-soft bg-oat px-4 py-3 font-sans tabular text-base leading-7 whitespace-pre-wrap dark:bg-ink"
         >
           {piece.instructions}
         </pre>

@@ -152,7 +152,7 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
             onInput={trackCaret}
             aria-invalid={error ? true : undefined}
             placeholder={'Rnd 1: 6 sc in MR (6)\nRnd 2: inc x6 (12)\nRnd 3: (sc, inc) x6 (18)'}
-            className="min-h-64 w-full rounded-soft border-2 border-wool bg-white px-4 py-3 font-mono text-[0.95rem] leading-6 text-ink focus:border-moss focus:outline-none aria-[invalid=true]:border-clay dark:border-[#4a423c] dark:bg-[#332e2a] dark:text-oat"
+            className="min-h-64 w-full rounded-soft border-2 border-wool bg-white px-4 py-3 font-sans tabular text-base leading-7 text-ink focus:border-moss focus:outline-none aria-[invalid=true]:border-clay dark:border-[#4a423c] dark:bg-[#332e2a] dark:text-oat"
           />
           {reading ? (
             <div className="flex flex-col gap-2">
@@ -164,7 +164,7 @@ export function PieceWorkspace({ index, weight }: { index: number; weight: numbe
               </p>
               <pre
                 aria-label={`Instructions in ${termsName[view]} (read-only)`}
-                className="min-h-64 overflow-x-auto rounded-soft border-2 border-dashed border-wool bg-oat px-4 py-3 font-mono text-[0.95rem] leading-6 whitespace-pre-wrap dark:border-[#4a423c] dark:bg-ink"
+                className="min-h-64 overflow-x-auto rounded-soft border-2 border-dashed border-wool bg-oat px-4 py-3 font-sans tabular text-base leading-7 whitespace-pre-wrap dark:border-[#4a423c] dark:bg-ink"
               >
                 {converted || ' '}
               </pre>

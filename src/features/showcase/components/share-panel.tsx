@@ -112,7 +112,7 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
                     readOnly
                     value={share.shareUrl}
                     onFocus={(e) => e.currentTarget.select()}
-                    className="min-h-tap w-full rounded-soft border-2 border-wool bg-white px-4 py-3 font-mono text-sm text-ink dark:border-[#4a423c] dark:bg-[#332e2a] dark:text-oat"
+                    className="min-h-tap w-full rounded-soft border-2 border-wool bg-white px-4 py-3 font-sans text-sm text-ink dark:border-[#4a423c] dark:bg-[#332e2a] dark:text-oat"
                     aria-describedby={`${name}-counts`}
                   />
                 </label>
