@@ -16,7 +16,9 @@ describe('what the Tally shows before the server answers', () => {
   });
 
   it('stops at the end of the last copy', () => {
-    expect(foldPending(shape, at(2, 2, 3), [], [tap('step'), tap('step'), tap('step')]).position).toEqual(at(2, 2, 4));
+    expect(foldPending(shape, at(2, 2, 3), [], [tap('step'), tap('step'), tap('step')]).position).toEqual(
+      at(2, 2, 4),
+    );
   });
 
   it('undoes its own taps exactly, then the server’s from its undo stack', () => {
@@ -37,7 +39,16 @@ describe('what the Tally shows before the server answers', () => {
 });
 
 describe('the round as the Tally shows it', () => {
-  const text = ['With plum yarn:', 'Rnd 1: 6 sc in MR (6)', 'Rnd 2: inc x6 (12)', 'Change to pink yarn.', 'Rnds 3-4: (sc, inc) x6 (18)', 'Place safety eyes between Rnds 3 and 4.', 'Rnd 5: sc around (18)', 'Fasten off.'].join('\n');
+  const text = [
+    'With plum yarn:',
+    'Rnd 1: 6 sc in MR (6)',
+    'Rnd 2: inc x6 (12)',
+    'Change to pink yarn.',
+    'Rnds 3-4: (sc, inc) x6 (18)',
+    'Place safety eyes between Rnds 3 and 4.',
+    'Rnd 5: sc around (18)',
+    'Fasten off.',
+  ].join('\n');
   const check = checkPiece(text);
 
   it('marks the step being worked in the line as written, leaving the stated count out', () => {
@@ -52,18 +63,25 @@ describe('the round as the Tally shows it', () => {
     const aroundLine = text.split('\n')[around.line];
     expect(highlight(aroundLine, around, around.steps[0]).find((p) => p.current)?.text).toBe('sc around');
     const ring = check.rounds[0];
-    expect(highlight(text.split('\n')[ring.line], ring, ring.steps[0]).find((p) => p.current)?.text).toBe('6 sc in MR');
+    expect(highlight(text.split('\n')[ring.line], ring, ring.steps[0]).find((p) => p.current)?.text).toBe(
+      '6 sc in MR',
+    );
   });
 
   it('brings up the notes before a round, a placement where it goes, and the end notes', () => {
-    const keys = (copy: number, round: number, step = 0, finished = false) => notesDue(check, { copy, round, step }, finished, 2).map((d) => `${d.reason}:${d.note.text}`);
+    const keys = (copy: number, round: number, step = 0, finished = false) =>
+      notesDue(check, { copy, round, step }, finished, 2).map((d) => `${d.reason}:${d.note.text}`);
     expect(keys(1, 0)).toEqual(['before:With plum yarn:']);
     expect(keys(1, 0, 1)).toEqual([]);
     expect(keys(1, 2)).toEqual(['before:Change to pink yarn.']);
     // The range's second round is not "before" anything, but it is where the eyes go.
     expect(keys(1, 3)).toEqual(['mark:Place safety eyes between Rnds 3 and 4.']);
     expect(keys(1, 4)).toEqual(['before:Place safety eyes between Rnds 3 and 4.']);
-    expect(keys(2, 0)).toEqual(['end:Fasten off.', 'copy:Copy 1 is done. Start copy 2 of 2 from the first round.', 'before:With plum yarn:']);
+    expect(keys(2, 0)).toEqual([
+      'end:Fasten off.',
+      'copy:Copy 1 is done. Start copy 2 of 2 from the first round.',
+      'before:With plum yarn:',
+    ]);
     expect(keys(2, 4, 18, true)).toEqual(['end:Fasten off.']);
   });
 });

@@ -20,7 +20,8 @@ let n = 0;
 const op = (action: 'step' | 'undo' | 'round' = 'step') => ({ opId: `op-test-${++n}-${Date.now()}`, action });
 /** Waits until the member's taps have all been answered (or a couple of seconds have passed). */
 const idle = async (box: Outbox) => {
-  for (let i = 0; i < 200 && box.getSnapshot().items.some((x) => x.memberId === 'u1'); i += 1) await new Promise((r) => setTimeout(r, 10));
+  for (let i = 0; i < 200 && box.getSnapshot().items.some((x) => x.memberId === 'u1'); i += 1)
+    await new Promise((r) => setTimeout(r, 10));
 };
 
 function recorder(status = 200, body: Record<string, unknown> = {}) {
@@ -29,7 +30,18 @@ function recorder(status = 200, body: Record<string, unknown> = {}) {
     http.post('*/api/pieces/:pieceId/progress', async ({ request }) => {
       const b = (await request.json()) as { opId: string };
       seen.push(b.opId);
-      return status === 200 ? HttpResponse.json({ progress: { copy: 1, round: 0, step: seen.length, done: seen.length, version: seen.length, updatedAt: null } }) : HttpResponse.json(body, { status });
+      return status === 200
+        ? HttpResponse.json({
+            progress: {
+              copy: 1,
+              round: 0,
+              step: seen.length,
+              done: seen.length,
+              version: seen.length,
+              updatedAt: null,
+            },
+          })
+        : HttpResponse.json(body, { status });
     }),
   );
   return seen;
@@ -69,7 +81,11 @@ describe('the Tally outbox', () => {
     server.use(
       http.post('*/api/pieces/:pieceId/progress', () => {
         calls += 1;
-        return calls === 1 ? HttpResponse.json({ error: 'Something went wrong on our side.' }, { status: 500 }) : HttpResponse.json({ progress: { copy: 1, round: 0, step: 1, done: 1, version: 1, updatedAt: null } });
+        return calls === 1
+          ? HttpResponse.json({ error: 'Something went wrong on our side.' }, { status: 500 })
+          : HttpResponse.json({
+              progress: { copy: 1, round: 0, step: 1, done: 1, version: 1, updatedAt: null },
+            });
       }),
     );
     const box = newBox();
@@ -78,7 +94,8 @@ describe('the Tally outbox', () => {
     expect(box.getSnapshot()).toMatchObject({ status: 'retrying', failing: true });
     expect(box.getSnapshot().items).toHaveLength(1);
     // The first retry comes after about a second.
-    for (let i = 0; i < 40 && box.getSnapshot().items.length; i += 1) await new Promise((r) => setTimeout(r, 50));
+    for (let i = 0; i < 40 && box.getSnapshot().items.length; i += 1)
+      await new Promise((r) => setTimeout(r, 50));
     expect(calls).toBe(2);
     expect(box.getSnapshot().items).toEqual([]);
   });
@@ -89,8 +106,13 @@ describe('the Tally outbox', () => {
       http.post('*/api/pieces/:pieceId/progress', () => {
         calls += 1;
         return calls === 1
-          ? HttpResponse.json({ error: 'This piece is already counted to its last stitch of its last copy.' }, { status: 409 })
-          : HttpResponse.json({ progress: { copy: 1, round: 0, step: 1, done: 1, version: 1, updatedAt: null } });
+          ? HttpResponse.json(
+              { error: 'This piece is already counted to its last stitch of its last copy.' },
+              { status: 409 },
+            )
+          : HttpResponse.json({
+              progress: { copy: 1, round: 0, step: 1, done: 1, version: 1, updatedAt: null },
+            });
       }),
     );
     const box = newBox();
@@ -99,7 +121,14 @@ describe('the Tally outbox', () => {
     box.enqueue({ kind: 'progress', pieceId: 3, op: op('undo') }, 'u1');
     await idle(box);
     expect(calls).toBe(2);
-    expect(box.getSnapshot().rejected).toEqual([{ opId: first.opId, pieceId: 3, kind: 'progress', message: 'This piece is already counted to its last stitch of its last copy.' }]);
+    expect(box.getSnapshot().rejected).toEqual([
+      {
+        opId: first.opId,
+        pieceId: 3,
+        kind: 'progress',
+        message: 'This piece is already counted to its last stitch of its last copy.',
+      },
+    ]);
     expect(box.getSnapshot().items).toEqual([]);
   });
 

@@ -12,7 +12,12 @@ import { server } from '../mocks/server';
 // The Tally screen through the real routes and the real app provider (its outbox sync included); only the
 // network is mocked. The mock server answers each tap by counting it, like the real one.
 
-const instructions = ['Rnd 1: 6 sc in MR (6)', 'Change to pink yarn.', 'Rnd 2: inc x6 (12)', 'Rnd 3: (sc, inc) x6 (18)'].join('\n');
+const instructions = [
+  'Rnd 1: 6 sc in MR (6)',
+  'Change to pink yarn.',
+  'Rnd 2: inc x6 (12)',
+  'Rnd 3: (sc, inc) x6 (18)',
+].join('\n');
 
 function project(): Project {
   return {
@@ -66,7 +71,12 @@ function fakeServer() {
   let pos = { copy: 1, round: 0, step: 0 };
   const stack: Array<typeof pos> = [];
   let version = 0;
-  const progress = (): PieceProgress => ({ ...pos, done: steps.slice(0, pos.round).reduce((a, b) => a + b, 0) + pos.step, version, updatedAt: '2026-12-01T10:00:00.000Z' });
+  const progress = (): PieceProgress => ({
+    ...pos,
+    done: steps.slice(0, pos.round).reduce((a, b) => a + b, 0) + pos.step,
+    version,
+    updatedAt: '2026-12-01T10:00:00.000Z',
+  });
   server.use(
     http.get('*/api/projects/7', () => HttpResponse.json({ project: project() })),
     http.get('*/api/pieces/11/progress', () => HttpResponse.json({ progress: progress() })),
@@ -177,7 +187,18 @@ describe('the Tally', () => {
     expect(within(zone()).getByText(/sc in the magic ring \(6 of 6\)/)).toBeInTheDocument();
     await user.keyboard('{ArrowLeft}');
     expect(within(zone()).getByText(/sc in the magic ring \(5 of 6\)/)).toBeInTheDocument();
-    await waitFor(() => expect(fake.sent.map((s) => s.action)).toEqual(['step', 'step', 'step', 'step', 'step', 'step', 'undo', 'undo']));
+    await waitFor(() =>
+      expect(fake.sent.map((s) => s.action)).toEqual([
+        'step',
+        'step',
+        'step',
+        'step',
+        'step',
+        'step',
+        'undo',
+        'undo',
+      ]),
+    );
     await waitFor(() => expect(fake.position()).toEqual({ copy: 1, round: 0, step: 4 }));
   });
 

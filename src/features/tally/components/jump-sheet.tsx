@@ -23,13 +23,8 @@ export function JumpSheet({
   position: Position;
   onJump: (to: Position) => void;
 }) {
+  // Mounted each time it opens, so it starts at the copy being worked.
   const [copy, setCopy] = useState(position.copy);
-  const [lastOpen, setLastOpen] = useState(open);
-  if (open !== lastOpen) {
-    // Each time the sheet opens it starts at the copy being worked.
-    setLastOpen(open);
-    if (open) setCopy(position.copy);
-  }
   return (
     <Sheet open={open} onClose={onClose} title="Jump to a round">
       {copies > 1 ? (

@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { memo, useMemo } from 'react';
 import { CloudOff, MapPin, Trash2 } from 'lucide-react';
 import type { PieceCheck } from '@/engine/types';
 import type { Placement } from '@/types/api';
@@ -41,8 +41,8 @@ export function silhouetteMarks(check: PieceCheck, placements: ShownPlacement[],
   return marks;
 }
 
-/** The piece's silhouette with where things went, and the list of marks. */
-export function PieceMarks({
+/** The piece's silhouette with where things went, and the list of marks. Memoised: taps leave it alone. */
+export const PieceMarks = memo(function PieceMarks({
   check,
   size,
   placements,
@@ -119,7 +119,7 @@ export function PieceMarks({
       )}
     </>
   );
-}
+});
 
 export function MarksSheet({
   open,

@@ -12,6 +12,8 @@ import { outbox } from '../lib/outbox';
 export function TallyOutboxSync({ memberId }: { memberId: string | null }) {
   const qc = useQueryClient();
   useEffect(() => {
+    let historyTimer: ReturnType<typeof setTimeout> | null = null;
+    let waitingHistory: number[] = [];
     outbox.setHandlers({
       progress: (item, progress) => acceptProgress(qc, item.pieceId, progress),
       placement: (item, placement) => {
@@ -24,7 +26,14 @@ export function TallyOutboxSync({ memberId }: { memberId: string | null }) {
         void qc.invalidateQueries({ queryKey: tallyKeys.piece(item.pieceId) });
       },
       drained: (pieceIds) => {
-        for (const id of pieceIds) void qc.invalidateQueries({ queryKey: tallyKeys.history(id) });
+        // The undo stack only matters for undoing offline; ask for it once the taps have paused a moment.
+        if (historyTimer) clearTimeout(historyTimer);
+        const ids = [...new Set([...waitingHistory, ...pieceIds])];
+        waitingHistory = ids;
+        historyTimer = setTimeout(() => {
+          waitingHistory = [];
+          for (const id of ids) void qc.invalidateQueries({ queryKey: tallyKeys.history(id) });
+        }, 1_500);
       },
     });
     void outbox.load();
@@ -33,6 +42,7 @@ export function TallyOutboxSync({ memberId }: { memberId: string | null }) {
     window.addEventListener('online', wake);
     document.addEventListener('visibilitychange', onVisible);
     return () => {
+      if (historyTimer) clearTimeout(historyTimer);
       window.removeEventListener('online', wake);
       document.removeEventListener('visibilitychange', onVisible);
     };

@@ -8,6 +8,25 @@ const QUIET_MS = 1_500;
 
 const taps = (n: number) => `${n} ${n === 1 ? 'tap' : 'taps'}`;
 
+/**
+ * How many of the member's taps wait, and whether that is worth saying: only once they have waited a while or
+ * a send has failed, so nothing on screen blinks with every tap on a good connection.
+ */
+export function useWaiting(state: OutboxState, memberId: string | null) {
+  const mine = state.items.filter((i) => i.memberId === memberId);
+  const oldest = mine[0]?.queuedAt ?? null;
+  const [, setTick] = useState(0);
+  useEffect(() => {
+    if (oldest === null) return;
+    const t = setInterval(() => setTick((n) => n + 1), 500);
+    return () => clearInterval(t);
+  }, [oldest]);
+  const stuck = state.status === 'offline' || state.status === 'retrying' || state.status === 'signed-out';
+  const show =
+    mine.length > 0 && (stuck || state.failing || (oldest !== null && Date.now() - oldest > QUIET_MS));
+  return { count: mine.length, show };
+}
+
 /** "3 taps waiting to sync", from the outbox kept on this device, so it is there again after a reload. */
 export function SyncBanner({
   state,
@@ -18,19 +37,8 @@ export function SyncBanner({
   memberId: string | null;
   pieceId: number;
 }) {
-  const mine = state.items.filter((i) => i.memberId === memberId);
-  const oldest = mine[0]?.queuedAt ?? null;
-  const [, setTick] = useState(0);
-  useEffect(() => {
-    if (oldest === null) return;
-    const t = setInterval(() => setTick((n) => n + 1), 500);
-    return () => clearInterval(t);
-  }, [oldest]);
-  const now = Date.now();
+  const { count, show } = useWaiting(state, memberId);
   const rejected = state.rejected.filter((r) => r.pieceId === pieceId);
-  const stuck = state.status === 'offline' || state.status === 'retrying' || state.status === 'signed-out';
-  // Once a send has failed the banner stays until the queue is empty, so it does not blink during retries.
-  const show = mine.length > 0 && (stuck || state.failing || (oldest !== null && now - oldest > QUIET_MS));
 
   return (
     <>
@@ -42,7 +50,7 @@ export function SyncBanner({
             <RefreshCw aria-hidden className="h-6 w-6 shrink-0" />
           )}
           <p className="flex-1 text-base leading-snug">
-            <span className="font-bold">{taps(mine.length)} waiting to sync.</span>{' '}
+            <span className="font-bold">{taps(count)} waiting to sync.</span>{' '}
             {state.status === 'signed-out'
               ? 'Sign in again to send them; they are kept on this device.'
               : state.status === 'offline'
@@ -52,7 +60,7 @@ export function SyncBanner({
               ? ' This browser cannot keep them through a reload: stay on this page until they are sent.'
               : ''}
           </p>
-          {state.status !== 'sending' ? (
+          {state.status !== 'idle' ? (
             <button
               type="button"
               onClick={() => outbox.wake()}

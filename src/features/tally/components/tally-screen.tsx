@@ -3,14 +3,12 @@ import { Link } from 'react-router-dom';
 import {
   ArrowLeft,
   CheckCheck,
-  CircleCheck,
   Cloud,
   CloudOff,
   ListOrdered,
   MapPin,
   MapPinPlus,
   Plus,
-  Repeat,
   Settings2,
   Undo2,
 } from 'lucide-react';
@@ -23,14 +21,14 @@ import { useDeletePlacement } from '../api/delete-placement';
 import { useTally, type TallyPiece } from '../hooks/use-tally';
 import { useOutbox } from '../hooks/use-outbox';
 import { useWakeLock } from '../hooks/use-wake-lock';
+import { useWide } from '../hooks/use-wide';
 import { useProgressStream } from '../hooks/use-progress-stream';
 import { buzz, click } from '../lib/feedback';
-import { outbox } from '../lib/outbox';
+import { outbox, queuedMarks } from '../lib/outbox';
 import { newOpId } from '../lib/op-id';
 import { useTallySettings } from '../lib/settings';
-import { InstructionLine } from './instruction-line';
-import { NoteCard } from './note-card';
-import { SyncBanner } from './sync-banner';
+import { ZoneContent } from './zone-content';
+import { SyncBanner, useWaiting } from './sync-banner';
 import { JumpSheet } from './jump-sheet';
 import { MarkSheet } from './mark-sheet';
 import { MarksSheet, PieceMarks, placementWhere, type ShownPlacement } from './marks-sheet';
@@ -157,9 +155,13 @@ export function TallyScreen({
     return () => window.removeEventListener('keydown', onKey);
   }, []);
 
+  // Only marks waiting in the outbox matter here, not every queued tap: keep the list (and the silhouette) still.
+  const marks = queuedMarks(box.items, piece.id);
+  const wide = useWide();
+  const waiting = useWaiting(box, memberId);
   const placements: ShownPlacement[] = useMemo(() => {
     const saved = (placementsQuery.data ?? []).map((p) => ({ ...p, waiting: false, key: `s${p.id}` }));
-    const queued = box.items.flatMap((i) =>
+    const queued = marks.flatMap((i) =>
       i.kind === 'placement' && i.pieceId === piece.id
         ? [
             {
@@ -177,7 +179,7 @@ export function TallyScreen({
         : [],
     );
     return [...saved, ...queued];
-  }, [placementsQuery.data, box.items, piece.id]);
+  }, [placementsQuery.data, marks, piece.id]);
 
   const whereNow =
     view && position
@@ -213,10 +215,15 @@ export function TallyScreen({
     return [...new Set([...fromOthers, ...fromNotes, ...DEFAULT_LABELS])].slice(0, 8);
   }, [tally.check.notes, placements, view?.round.number]);
   // Where the same part went on another copy at this round: the second ear goes where the first did.
-  const earlier =
-    view && position
-      ? placements.filter((p) => p.round === view.round.number && p.copy !== position.copy)
-      : [];
+  const roundNumber = view?.round.number;
+  const copyNow = position?.copy;
+  const earlier = useMemo(
+    () =>
+      roundNumber === undefined
+        ? []
+        : placements.filter((p) => p.round === roundNumber && p.copy !== copyNow),
+    [placements, roundNumber, copyNow],
+  );
 
   const announcement = useMemo(() => {
     if (!view || !position) return '';
@@ -230,8 +237,8 @@ export function TallyScreen({
     ? 'bg-white text-black dark:bg-black dark:text-white'
     : 'bg-oat text-ink dark:bg-ink dark:text-oat';
   const zoneTone = hc
-    ? 'bg-white text-black ring-4 ring-black active:bg-[#e6e6e6] dark:bg-black dark:text-white dark:ring-white dark:active:bg-[#222]'
-    : 'bg-white/75 text-ink ring-2 ring-wool active:bg-wool dark:bg-[#332e2a] dark:text-oat dark:ring-[#4a423c] dark:active:bg-[#4a423c]';
+    ? 'bg-white text-black border-4 border-black dark:bg-black dark:text-white dark:border-white'
+    : 'bg-[#fdfbf7] text-ink border-2 border-wool dark:bg-[#332e2a] dark:text-oat dark:border-[#4a423c]';
 
   if (!position || !view || !box.loaded) {
     return (
@@ -267,7 +274,6 @@ export function TallyScreen({
     );
   }
 
-  const next = view.next;
   const unread = tally.unread[0];
   const zoneLabel = unread
     ? `Done: ${unread.note.text}`
@@ -276,8 +282,7 @@ export function TallyScreen({
       : settings.mode === 'round'
         ? `Round done: finish ${view.name}`
         : 'Count one stitch';
-  const waiting = box.items.filter((i) => i.memberId === memberId).length;
-  const synced = waiting === 0;
+  const synced = !waiting.show;
 
   return (
     <div
@@ -314,7 +319,7 @@ export function TallyScreen({
           }
         >
           {synced ? <Cloud aria-hidden className="h-5 w-5" /> : <CloudOff aria-hidden className="h-5 w-5" />}
-          <span className="tabular">{synced ? 'Saved' : `${waiting} waiting`}</span>
+          <span className="tabular">{synced ? 'Saved' : `${waiting.count} waiting`}</span>
         </span>
         <button
           type="button"
@@ -371,126 +376,40 @@ export function TallyScreen({
           }}
           onContextMenu={(e) => e.preventDefault()}
           className={cn(
-            'flex min-h-0 flex-1 touch-manipulation flex-col rounded-blob px-4 py-3 text-left select-none focus-visible:outline-offset-4 md:px-8 md:py-6',
+            // Opaque, bordered and contained: a tap repaints only the zone, and cheaply.
+            'flex min-h-0 flex-1 touch-manipulation flex-col rounded-blob px-4 py-3 text-left select-none [contain:strict] focus-visible:outline-offset-4 md:px-8 md:py-6',
             zoneTone,
           )}
           data-testid="tally-zone"
         >
-          {unread ? (
-            <NoteCard
-              due={unread}
-              roundName={view.name}
-              more={tally.unread.length - 1}
-              cautions={unread.note.kind === 'placement' ? cautions : []}
-            />
-          ) : tally.finished ? (
-            <span className="flex h-full flex-col items-center justify-center gap-3 text-center">
-              <CircleCheck aria-hidden className="h-16 w-16 text-moss dark:text-[#9cc3a8]" />
-              <span className="block text-3xl font-bold">{piece.name} is counted to the end</span>
-              <span className="block text-lg">
-                All {tally.check.rounds.length} rounds
-                {piece.copies > 1 ? ` of all ${piece.copies} copies` : ''}. Undo if that was one tap too many.
-              </span>
-            </span>
-          ) : (
-            <>
-              <span className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
-                <span className="tabular text-4xl font-bold sm:text-5xl md:text-6xl">
-                  {view.word} {view.round.number}
-                  <span className="text-2xl font-semibold opacity-70 sm:text-3xl"> of {view.of}</span>
-                </span>
-                {view.round.loops.map((l) => (
-                  <span
-                    key={l}
-                    className="rounded-full border-2 border-current px-3 py-0.5 text-base font-bold"
-                  >
-                    {l === 'blo' ? 'BLO · back loop only' : 'FLO · front loop only'}
-                  </span>
-                ))}
-                <span className="tabular text-lg font-semibold opacity-80">
-                  ends with {view.expected} sts
-                </span>
-              </span>
-              <InstructionLine
-                segments={view.segments}
-                highContrast={hc}
-                className="mt-2 line-clamp-4 md:text-3xl"
-              />
-              {earlier.length ? (
-                <span className="mt-2 block rounded-soft bg-[#f3dccf] px-3 py-1.5 text-base font-semibold text-ink">
-                  <MapPin aria-hidden className="mr-1 inline h-4 w-4" />
-                  On copy {earlier[0].copy}:{' '}
-                  {earlier
-                    .map((p) => `${p.label}${p.step !== null ? ` at stitch ${p.step}` : ''}`)
-                    .join(', ')}
-                </span>
-              ) : null}
-              <span className="flex flex-1 flex-col items-center justify-center py-2 text-center">
-                {settings.mode === 'round' ? (
-                  <>
-                    <span className="block text-3xl font-bold">Tap when {view.name} is done</span>
-                    <span className="tabular mt-2 block text-xl">{view.expected} stitches at the end</span>
-                  </>
-                ) : (
-                  <>
-                    <span
-                      className="tabular block text-8xl leading-none font-bold sm:text-9xl md:text-[11rem]"
-                      aria-hidden
-                    >
-                      {view.round.worked > 0 ? view.worked : view.made}
-                    </span>
-                    <span className="tabular mt-1 block text-xl font-semibold sm:text-2xl">
-                      {view.round.worked > 0
-                        ? `of ${view.round.worked} worked — ${view.made} made`
-                        : `of ${view.round.stitches} made`}
-                    </span>
-                    {view.stepsInRound !== (view.round.worked || view.round.stitches) ? (
-                      <span className="tabular mt-1 block text-base opacity-75">
-                        step {Math.min(view.stepsDone + 1, view.stepsInRound)} of {view.stepsInRound}
-                      </span>
-                    ) : null}
-                    {next ? (
-                      <span className="mt-4 block text-2xl leading-snug font-bold sm:text-3xl">
-                        <span className="font-semibold opacity-75">Next: </span>
-                        {next.text}
-                      </span>
-                    ) : (
-                      <span className="mt-4 block text-2xl font-bold">
-                        Work {view.name} as written, then tap
-                      </span>
-                    )}
-                    {next?.repeat ? (
-                      <span className="tabular mt-2 flex items-center gap-1 text-lg font-semibold">
-                        <Repeat aria-hidden className="h-5 w-5" /> repeat {next.repeat.index} of{' '}
-                        {next.repeat.of}
-                      </span>
-                    ) : null}
-                  </>
-                )}
-              </span>
-              <span className="block text-center text-sm opacity-60">
-                {settings.mode === 'round'
-                  ? 'Tap anywhere here when the round is done'
-                  : 'Tap anywhere here for each stitch'}
-              </span>
-            </>
-          )}
+          <ZoneContent
+            view={view}
+            unread={unread ?? null}
+            moreNotes={tally.unread.length - 1}
+            finished={tally.finished}
+            mode={settings.mode}
+            highContrast={hc}
+            earlier={earlier}
+            cautions={cautions}
+            pieceName={piece.name}
+            copies={piece.copies}
+            rounds={tally.check.rounds.length}
+          />
         </button>
         {/* On a tablet there is room to keep the silhouette in view beside the tap zone. */}
-        <aside
-          aria-label={`Marks on ${piece.name}`}
-          className="hidden w-72 shrink-0 overflow-y-auto md:block lg:w-80"
-        >
-          <PieceMarks
-            check={tally.check}
-            size={stitchSize}
-            placements={placements}
-            copies={piece.copies}
-            pieceName={piece.name}
-            current={view.round.number}
-            compact
-          />
-        </aside>
+        {wide ? (
+          <aside aria-label={`Marks on ${piece.name}`} className="w-72 shrink-0 overflow-y-auto lg:w-80">
+            <PieceMarks
+              check={tally.check}
+              size={stitchSize}
+              placements={placements}
+              copies={piece.copies}
+              pieceName={piece.name}
+              current={view.round.number}
+              compact
+            />
+          </aside>
+        ) : null}
       </div>
       <p id="tally-position" className="sr-only" aria-live="polite" aria-atomic="true">
         {announcement}
@@ -549,42 +468,45 @@ export function TallyScreen({
         </ToolButton>
       </nav>
 
-      <JumpSheet
-        open={sheet === 'jump'}
-        onClose={() => setSheet(null)}
-        check={tally.check}
-        copies={piece.copies}
-        pieceName={piece.name}
-        position={position}
-        onJump={(to) => {
-          tally.jump(to);
-          backToZone();
-        }}
-      />
-      <MarkSheet
-        open={sheet === 'mark'}
-        onClose={() => setSheet(null)}
-        where={whereNow}
-        suggestions={suggestions}
-        onSave={saveMark}
-      />
-      <MarksSheet
-        open={sheet === 'marks'}
-        onClose={() => setSheet(null)}
-        check={tally.check}
-        size={stitchSize}
-        placements={placements}
-        copies={piece.copies}
-        pieceName={piece.name}
-        current={view.round.number}
-        onDelete={(id) => deletePlacement.mutate(id)}
-      />
-      <SettingsSheet
-        open={sheet === 'settings'}
-        onClose={() => setSheet(null)}
-        settings={settings}
-        onChange={setSettings}
-      />
+      {sheet === 'jump' ? (
+        <JumpSheet
+          open
+          onClose={() => setSheet(null)}
+          check={tally.check}
+          copies={piece.copies}
+          pieceName={piece.name}
+          position={position}
+          onJump={(to) => {
+            tally.jump(to);
+            backToZone();
+          }}
+        />
+      ) : null}
+      {sheet === 'mark' ? (
+        <MarkSheet
+          open
+          onClose={() => setSheet(null)}
+          where={whereNow}
+          suggestions={suggestions}
+          onSave={saveMark}
+        />
+      ) : null}
+      {sheet === 'marks' ? (
+        <MarksSheet
+          open
+          onClose={() => setSheet(null)}
+          check={tally.check}
+          size={stitchSize}
+          placements={placements}
+          copies={piece.copies}
+          pieceName={piece.name}
+          current={view.round.number}
+          onDelete={(id) => deletePlacement.mutate(id)}
+        />
+      ) : null}
+      {sheet === 'settings' ? (
+        <SettingsSheet open onClose={() => setSheet(null)} settings={settings} onChange={setSettings} />
+      ) : null}
     </div>
   );
 }

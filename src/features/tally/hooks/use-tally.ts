@@ -1,7 +1,14 @@
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { checkPiece } from '@/engine';
 import type { Terms } from '@/engine/types';
-import { doneAt, isFinished, shapeOf, stepsPerCopy, type Position } from '@/schemas/progress-position';
+import {
+  doneAt,
+  isFinished,
+  samePosition,
+  shapeOf,
+  stepsPerCopy,
+  type Position,
+} from '@/schemas/progress-position';
 import type { ProgressAction } from '@/schemas/progress';
 import { useProgress } from '../api/get-progress';
 import { useHistory } from '../api/get-history';
@@ -12,6 +19,16 @@ import { newOpId } from '../lib/op-id';
 import { readAcknowledged, writeAcknowledged } from '../lib/acknowledged';
 import { SessionClock } from '../lib/session-clock';
 import { useOutbox } from './use-outbox';
+
+/**
+ * The same position object for as long as the count stays put, so an answer from the server that only confirms
+ * what the screen already shows redraws nothing.
+ */
+function useSamePosition(p: Position | null): Position | null {
+  const kept = useRef(p);
+  if (p === null || kept.current === null || !samePosition(kept.current, p)) kept.current = p;
+  return kept.current;
+}
 
 export interface TallyPiece {
   id: number;
@@ -51,7 +68,7 @@ export function useTally(piece: TallyPiece, terms: Terms, memberId: string) {
     () => (confirmed ? foldPending(shape, confirmed, stack, pending, confirmed.version > 0) : null),
     [shape, confirmed, stack, pending],
   );
-  const position = folded?.position ?? null;
+  const position = useSamePosition(folded?.position ?? null);
   const finished = position ? isFinished(shape, position) : false;
   const view = useMemo(
     () => (position ? roundView(check, lines, shape, position) : null),
@@ -66,6 +83,7 @@ export function useTally(piece: TallyPiece, terms: Terms, memberId: string) {
   const unread = useMemo(() => due.filter((d) => !acknowledged.has(d.key)), [due, acknowledged]);
 
   const [clock] = useState(() => new SessionClock());
+  useEffect(() => () => clock.save(), [clock]);
 
   const send = useCallback(
     (action: ProgressAction, to?: Position) => {

@@ -29,7 +29,8 @@ export type OutboxItem =
       queuedAt: number;
     };
 
-export type OutboxStatus = 'idle' | 'sending' | 'offline' | 'retrying' | 'signed-out';
+// Changes only when something goes wrong or comes right again, not with every tap (each change redraws the Tally).
+export type OutboxStatus = 'idle' | 'offline' | 'retrying' | 'signed-out';
 
 export interface Rejected {
   opId: string;
@@ -59,6 +60,28 @@ type Sender = {
   progress: (pieceId: number, op: ProgressOp) => Promise<PieceProgress>;
   placement: (pieceId: number, input: PlacementInput) => Promise<Placement>;
 };
+
+type PostTask = (fn: () => void, options: { priority: 'background' | 'user-visible' }) => Promise<void>;
+
+/**
+ * Runs `fn` once the next frame is painted, behind whatever the browser still has to do for it, and in any case
+ * within 100 ms (a hidden tab paints no frames).
+ */
+function afterPaint(fn: () => void) {
+  let done = false;
+  const run = () => {
+    if (done) return;
+    done = true;
+    fn();
+  };
+  setTimeout(run, 100);
+  if (typeof requestAnimationFrame !== 'function') return;
+  requestAnimationFrame(() => {
+    const postTask = (globalThis as { scheduler?: { postTask?: PostTask } }).scheduler?.postTask;
+    if (postTask) void postTask(run, { priority: 'background' });
+    else setTimeout(run, 0);
+  });
+}
 
 const RETRY_MS = [1_000, 2_000, 5_000, 10_000, 30_000];
 type NewItem =
@@ -132,7 +155,7 @@ export class Outbox {
   setMember(memberId: string | null) {
     const changed = memberId !== this.memberId;
     this.memberId = memberId;
-    if (changed && memberId) void this.flush();
+    if (changed && memberId) void this.flush(true);
   }
 
   get member() {
@@ -148,8 +171,13 @@ export class Outbox {
     const key = `${String(queuedAt).padStart(15, '0')}-${String(this.seq).padStart(6, '0')}-${opId}`;
     const full = { ...item, key, opId, memberId, queuedAt } as OutboxItem;
     this.update({ items: [...this.state.items, full] });
-    void this.store.put(key, full);
-    void this.flush();
+    // The count on screen changes in this frame; writing to IndexedDB and starting the request wait until it is
+    // painted (a frame at most), so the tap shows at once.
+    afterPaint(() => {
+      // Already answered (the stream can be that quick) or reset: nothing to keep.
+      if (this.state.items.includes(full)) void this.store.put(key, full);
+      void this.flush();
+    });
     return full;
   }
 
@@ -196,10 +224,12 @@ export class Outbox {
       this.timer = null;
     }
     this.attempt = 0;
-    void this.load().then(() => this.flush());
+    void this.load().then(() => this.flush(true));
   }
 
-  async flush(): Promise<void> {
+  /** Sends what is queued; after a 401 it waits for a sign-in (setMember) or an explicit wake. */
+  async flush(force = false): Promise<void> {
+    if (this.state.status === 'signed-out' && !force) return;
     if (this.flushing) {
       this.again = true;
       return;
@@ -219,8 +249,6 @@ export class Outbox {
     for (;;) {
       const next = this.state.items.find((i) => i.memberId === this.memberId);
       if (!next || !this.memberId) {
-        if (this.state.status !== 'idle' && this.state.status !== 'signed-out')
-          this.update({ status: 'idle' });
         if (this.touched.size) {
           const pieces = [...this.touched];
           this.touched.clear();
@@ -228,7 +256,6 @@ export class Outbox {
         }
         return;
       }
-      if (this.state.status !== 'sending') this.update({ status: 'sending' });
       try {
         if (next.kind === 'progress') {
           const progress = await this.send.progress(next.pieceId, next.op);
@@ -241,7 +268,8 @@ export class Outbox {
         }
         this.touched.add(next.pieceId);
         this.attempt = 0;
-        if (this.state.failing) this.update({ failing: false });
+        if (this.state.failing || this.state.status !== 'idle')
+          this.update({ status: 'idle', failing: false });
       } catch (e) {
         const error = e instanceof ApiError ? e : new ApiError(0, 'Whorlbook cannot reach the server.');
         if (error.status === 0) {
@@ -272,6 +300,22 @@ export class Outbox {
       }
     }
   }
+}
+
+const markCache = new Map<number, { key: string; list: Array<Extract<OutboxItem, { kind: 'placement' }>> }>();
+/**
+ * The marks still queued for a piece, as the same array for as long as they stay the same, so a screen can
+ * leave its silhouette alone while ordinary taps come and go.
+ */
+export function queuedMarks(items: OutboxItem[], pieceId: number) {
+  const list = items.filter(
+    (i): i is Extract<OutboxItem, { kind: 'placement' }> => i.kind === 'placement' && i.pieceId === pieceId,
+  );
+  const key = list.map((i) => i.opId).join(',');
+  const cached = markCache.get(pieceId);
+  if (cached && cached.key === key) return cached.list;
+  markCache.set(pieceId, { key, list });
+  return list;
 }
 
 /** The app's one outbox. */

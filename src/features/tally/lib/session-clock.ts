@@ -40,6 +40,7 @@ export class SessionClock {
   private stitches = 0;
   private counted: Array<{ steps: number; stitches: number }> = [];
   private pace = readPace();
+  private savedAt = 0;
 
   /** A counting tap moved `steps` steps that made `stitches` stitches. */
   tap(now: number, steps: number, stitches: number) {
@@ -70,6 +71,15 @@ export class SessionClock {
     this.pace = { ms: this.pace.ms + ms, steps: Math.max(0, this.pace.steps + steps) };
     // Recent work matters most: halve the history once it is large.
     if (this.pace.steps > 5000) this.pace = { ms: this.pace.ms / 2, steps: this.pace.steps / 2 };
+    // Written now and then, not on every tap: localStorage is synchronous.
+    const now = Date.now();
+    if (now - this.savedAt < 10_000) return;
+    this.savedAt = now;
+    this.save();
+  }
+
+  /** Keeps the long-run pace on this device (also called when the Tally closes). */
+  save() {
     try {
       localStorage.setItem(PACE_KEY, JSON.stringify(this.pace));
     } catch {
