@@ -1,4 +1,4 @@
-import { Cloud, Info, Layers, MapPin, Palette, Ruler, Scissors } from 'lucide-react';
+import { Cloud, Info, Layers, Link2, MapPin, Palette, Ruler, Scissors } from 'lucide-react';
 import type { NoteKind } from '@/engine/types';
 import type { DueNote } from '../lib/piece-view';
 
@@ -8,6 +8,7 @@ const kinds: Record<NoteKind, { word: string; icon: typeof Info }> = {
   stuffing: { word: 'Stuffing', icon: Cloud },
   placement: { word: 'Placement', icon: MapPin },
   'fasten-off': { word: 'Fasten off', icon: Scissors },
+  join: { word: 'Join the round', icon: Link2 },
   other: { word: 'Note', icon: Info },
 };
 

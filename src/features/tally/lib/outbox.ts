@@ -171,13 +171,10 @@ export class Outbox {
     const key = `${String(queuedAt).padStart(15, '0')}-${String(this.seq).padStart(6, '0')}-${opId}`;
     const full = { ...item, key, opId, memberId, queuedAt } as OutboxItem;
     this.update({ items: [...this.state.items, full] });
-    // The count on screen changes in this frame; writing to IndexedDB and starting the request wait until it is
-    // painted (a frame at most), so the tap shows at once.
-    afterPaint(() => {
-      // Already answered (the stream can be that quick) or reset: nothing to keep.
-      if (this.state.items.includes(full)) void this.store.put(key, full);
-      void this.flush();
-    });
+    // Kept on the device first (IndexedDB writes happen off the main thread); the request waits until the count
+    // on screen is painted, a frame at most, so the tap shows at once.
+    void this.store.put(key, full);
+    afterPaint(() => void this.flush());
     return full;
   }
 
