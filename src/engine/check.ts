@@ -34,6 +34,12 @@ class PieceReader {
   waiting: Note[] = [];
   prev: number;
   prevName: string | null;
+  /**
+   * The count the pattern says the maker has, when it differs from `prev`: after a round whose stated
+   * count its instructions miss, the next round may be written for either, and is only a slip if it is
+   * wrong from both (one slip, one complaint).
+   */
+  prevStated: number | null = null;
   lastNumber = 0;
   lastKind: 'round' | 'row' = 'round';
   pendingLeftover: LeftoverNode | null = null;
@@ -81,10 +87,13 @@ class PieceReader {
     };
   }
 
-  addNote(line: number, text: string): Note {
+  addNote(line: number, text: string, kind?: Note['kind']): Note {
     const reading = classifyNote(text);
     const last = this.rounds[this.rounds.length - 1];
-    const note: Note = { line, text, kind: reading.kind, afterRound: last ? last.number : null, beforeRound: null };
+    let k = kind ?? reading.kind;
+    // A join ends the round before it; with no round before, it is only words.
+    if (k === 'join' && !last) k = 'other';
+    const note: Note = { line, text, kind: k, afterRound: last ? last.number : null, beforeRound: null };
     if (reading.hookMm !== undefined) note.hookMm = reading.hookMm;
     if (reading.placement) note.placement = reading.placement;
     if (reading.smallParts) note.smallParts = true;
@@ -128,6 +137,18 @@ class PieceReader {
       );
     }
     for (const n of parsed.notes) if (n.position === 'before') this.addNote(idx, n.text);
+    // The count may be stated in the label ("Round 5 (36 sts):") as well as at the end of the line.
+    const endStated = parsed.stated;
+    const labelStated = label?.stated ?? null;
+    const twoCounts = endStated !== null && labelStated !== null && endStated !== labelStated;
+    if (twoCounts) {
+      lineProblems.push(
+        warning(
+          `${numbers.length === 1 ? `${noun} ${numbers[0]}` : `'${label!.label}'`} gives two counts: ${labelStated} in the label and ${endStated} at the end of the line`,
+          label!.statedCol,
+        ),
+      );
+    }
 
     for (let j = 0; j < numbers.length; j++) {
       if (this.rounds.length >= MAX_ROUNDS) {
@@ -165,25 +186,42 @@ class PieceReader {
         nodes = [this.pendingLeftover, ...nodes];
         this.pendingLeftover = null;
       }
-      const stated = parsed.stated;
+      let stated = endStated ?? labelStated;
+      let statedCol = endStated !== null ? parsed.statedCol : (label?.statedCol ?? null);
       const nothing = (parsed.empty && !rep) || (rep && source === parsed);
       if (parsed.empty && !rep) problems.push(error(`${name} has no instructions`, textStart));
-      if (!nothing) res = evaluate(source, env, { nodes, initialLoop: label?.loop ?? null, stated });
+      const evalOpts = { nodes, initialLoop: label?.loop ?? null, stated };
+      if (!nothing) res = evaluate(source, env, evalOpts);
       let stitches: number;
+      /** What the round makes when worked from the stated count of the round before (see prevStated). */
+      let fromStated: number | null = null;
       if (!res) stitches = stated ?? this.prev;
       else if (parsed.uncertain) stitches = stated ?? res.stitches;
       else {
-        // A repeated round's sentences point at this line's "rep", not at the line repeated.
-        problems.push(...(source === parsed ? res.problems : res.problems.map((p) => ({ ...p, column: rep!.col }))));
         stitches = res.stitches;
-        if (stated !== null && stated !== stitches) {
+        // Of two counts, the one the round makes is the one meant; the other was already said.
+        if (twoCounts && stitches === labelStated) {
+          stated = labelStated;
+          statedCol = label!.statedCol;
+        }
+        const complains = res.problems.length > 0 || (stated !== null && stated !== stitches);
+        let excused = false;
+        if (this.prevStated !== null && (complains || stated === null)) {
+          const alt = evaluate(source, { ...env, prev: this.prevStated }, evalOpts);
+          fromStated = alt.stitches;
+          // Written for the count the round before states: that round has already said what slipped.
+          excused = complains && alt.problems.length === 0 && (stated === null || stated === alt.stitches);
+        }
+        // A repeated round's sentences point at this line's "rep", not at the line repeated.
+        if (!excused) problems.push(...(source === parsed ? res.problems : res.problems.map((p) => ({ ...p, column: rep!.col }))));
+        if (!excused && stated !== null && stated !== stitches) {
           // One slip, one sentence: a round that leaves stitches unworked (or works too many) usually
           // misses its stated count for the same reason, so the count goes into that sentence.
           const cover = problems.findIndex((p) => / works \d+ (of \d+ |stitches, but )|cannot fit the round|stitch(es)? over$/.test(p.message));
           if (cover >= 0) {
             problems[cover] = { ...problems[cover], message: `${problems[cover].message} (it makes ${stitches}, not the ${stated} stated)` };
           } else {
-            problems.push(error(`${name} makes ${plural(stitches, 'stitch', 'stitches')}, not ${stated}`, parsed.statedCol));
+            problems.push(error(`${name} makes ${plural(stitches, 'stitch', 'stitches')}, not ${stated}`, statedCol));
           }
         }
       }
@@ -206,6 +244,10 @@ class PieceReader {
       this.records.push({ round, nodes: own, parsed: source });
       for (const n of this.waiting) n.beforeRound = number;
       this.waiting = [];
+      // The count the pattern means from here: its stated count, else what the round makes from the
+      // count meant before it (an unreadable or empty round keeps what was meant).
+      const meant = stated ?? (!res ? (this.prevStated ?? stitches) : parsed.uncertain ? stitches : (fromStated ?? stitches));
+      this.prevStated = meant !== stitches ? meant : null;
       this.prev = stitches;
       this.prevName = name;
       this.lastNumber = number;
@@ -234,6 +276,13 @@ class PieceReader {
         // "Working in the front loops left from Rnd 6:" on its own line: the next round starts there.
         this.pendingLeftover = parsed.nodes.find((n): n is LeftoverNode => n.t === 'leftover') ?? null;
         this.addNote(idx, line.trim());
+        return;
+      }
+      // "Sl st in first sc to join." alone on its line: the end of the round before, not a round.
+      const onlyJoin =
+        parsed.stated === null && parsed.nodes.some((n) => n.t === 'join') && parsed.nodes.every((n) => n.t === 'join' || n.t === 'turn');
+      if (onlyJoin) {
+        this.addNote(idx, line.trim(), 'join');
         return;
       }
       const isRep = parsed.repRound !== null;

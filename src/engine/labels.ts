@@ -12,6 +12,10 @@ export interface Label {
   textStart: number;
   /** A loop named in the label's bracket: "Rnd 6 (BLO):". */
   loop: Loop | null;
+  /** A count in the label's bracket: "Round 5 (36 sts):", "Rnd 5 [36]:". */
+  stated: number | null;
+  /** Column of that bracket. */
+  statedCol: number | null;
   problems: Problem[];
 }
 
@@ -30,20 +34,40 @@ const labelRe = (conn: string) =>
 const LABEL_ONE = labelRe(RANGE_CONN);
 const LABEL_MANY = labelRe(LIST_CONN);
 const PLURAL = /^\s*(?:[-•·]\s+)?(?:rounds|rnds|rds|rows)\b/i;
+/** "(36)", "[36 sts]", "(36 stitches)", "(total 36)", "(36 sc)": a count, not an aside. */
+const COUNT_BRACKET =
+  /^[([]\s*(?:total:?\s*)?(\d{1,6})\s*(?:sts?\.?|stitch(?:es)?|sc|hdc|dc|tr|htr|dtr)?\s*(?:total|in all)?\s*[)\]]$/i;
+/** What a bracket right after the number may say and still belong to the label. */
+const ASIDE_BRACKET = /^[([]\s*(?:rs|ws|right side|wrong side|blo|flo|bl|fl|back loops?(?: only)?|front loops?(?: only)?|make \d+|x\s*\d+|\d+\s*x|optional)\s*[)\]]$/i;
 
 export function readLabel(line: string): Label | null {
   const m = (PLURAL.test(line) ? LABEL_MANY : LABEL_ONE).exec(line);
   if (!m) return null;
   const word = m[2].toLowerCase();
-  const spaced = /\s$/.test(m[0]);
-  let end = m[0].length;
+  let whole = m[0];
+  let bracketText = m[5] ?? '';
+  if (bracketText) {
+    // "Rnd 3 (sc, inc) x6 (18)": without a separator after it, a bracket that is neither a count nor
+    // an aside is the round's first group, not part of the label.
+    const after = line.slice(whole.length);
+    // ("Rnd 2 (2 sc) in each st": a count of stitches named by a stitch word belongs to the label only
+    // with a separator after it.)
+    const plainCount = COUNT_BRACKET.test(bracketText) && !/\d\s*(?:sc|hdc|dc|tr|htr|dtr)\b/i.test(bracketText);
+    const labelish = plainCount || ASIDE_BRACKET.test(bracketText) || /^\s*[:.\-–—,]/.test(after);
+    if (!labelish) {
+      whole = whole.slice(0, whole.length - bracketText.length);
+      bracketText = '';
+    }
+  }
+  const spaced = /\s$/.test(whole);
+  let end = whole.length;
   const rest = line.slice(end);
   // What separates the label from the instructions. A bare "R" needs punctuation ("R5:"), the words
   // may be followed by a space only ("Rnd 5 sc around").
   const sep = /^\s*(?:[:.)\-–—,]|$)/.exec(rest);
   if (sep) end += sep[0].length;
   else if (word === 'r' || !(spaced || /^\s/.test(rest))) return null;
-  const label = line.slice(m[1].length, m[0].length).replace(/\s*(\([^)]*\)|\[[^\]]*\])\s*$/, '').trim();
+  const label = line.slice(m[1].length, whole.length).replace(/\s*(\([^)]*\)|\[[^\]]*\])\s*$/, '').trim();
   const problems: Problem[] = [];
   const numbers: number[] = [];
   const first = Number(m[3]);
@@ -67,14 +91,17 @@ export function readLabel(line: string): Label | null {
     last = n;
   }
   if (numbers.length > MAX_RANGE) numbers.length = MAX_RANGE;
-  const bracket = (m[5] ?? '').toLowerCase();
+  const bracket = bracketText.toLowerCase();
   const loop: Loop | null = /\b(blo|bl|back loops?)\b/.test(bracket) ? 'blo' : /\b(flo|fl|front loops?)\b/.test(bracket) ? 'flo' : null;
+  const count = COUNT_BRACKET.exec(bracketText);
   return {
     label,
     kind: word.startsWith('row') ? 'row' : 'round',
     numbers,
     textStart: end,
     loop,
+    stated: count ? Number(count[1]) : null,
+    statedCol: count ? whole.length - bracketText.length : null,
     problems,
   };
 }

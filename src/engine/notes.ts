@@ -26,6 +26,14 @@ const COLOUR_WORDS = new RegExp(
 const COLOUR_LETTER =
   /\b(?:[Cc]hange|[Ss]witch|[Ss]wap|[Jj]oin)\s+(?:yarn\s+|colou?r\s+)?(?:to\s+)?[A-Z]\b|^\s*(?:[Ww]ith|[Uu]sing|[Ii]n)\s+[A-Z](?=\s*(?:,|$|\s+(?:yarn|and|for)\b))/;
 
+// "Join with sl st to first sc.", "Join.", "join rnd with ss in top of beg ch", "Sl st in first st to join".
+// Not "Join the ears to the head" (a seam) or "Join new yarn" (a colour).
+const SLIP = String.raw`(?:sl(?:ip)?\s*st(?:itch)?|ss)`;
+const JOIN = new RegExp(
+  String.raw`^\s*(?:join(?:\s+(?:the\s+)?(?:rounds?|rnds?|rds?|ring))?(?:\s*(?:[.,;!]|$)|\s+(?:with|using)\s+(?:a\s+)?${SLIP}\b|\s+(?:to|in|into)\s+(?:the\s+)?(?:first|1st|top|beg(?:inning)?|starting)\b)|${SLIP}\s+(?:to|in|into)\s+(?:the\s+)?(?:first|1st|top|beg(?:inning)?|starting)\b|${SLIP}(?:\s+\w+){0,6}\s+to\s+join\b)`,
+  'i',
+);
+
 function num(s: string): number {
   return Number(s.replace(',', '.'));
 }
@@ -87,6 +95,7 @@ export function classifyNote(text: string): NoteReading {
     return r;
   }
   if (COLOUR_WORDS.test(text) || COLOUR_LETTER.test(text)) return { kind: 'colour' };
+  if (JOIN.test(text)) return { kind: 'join' };
   if (STUFF.test(text)) return { kind: 'stuffing' };
   return smallParts ? { kind: 'other', smallParts } : { kind: 'other' };
 }

@@ -430,7 +430,9 @@ function readFill(els: El[], i: number): { leave: number; next: number } | null 
   if (isWord(els[j], 'rep')) j++;
   if (isWord(els[j], 'around', 'across', 'remaining')) {
     j++;
-    if (isWord(els[j], 'st')) j++;
+    // "remaining ch", "across the chain": the noun names what is worked into, it is not a stitch made.
+    // ("sc across ch 1 turn": that ch is a chain.)
+    if (isWord(els[j], 'st') || (isWord(els[j], 'ch') && !isNum(els[j + 1]))) j++;
     return { leave: 0, next: j };
   }
   if (isWord(els[j], 'to')) {
@@ -448,6 +450,11 @@ function readFill(els: El[], i: number): { leave: number; next: number } | null 
   }
   if (isWord(els[j], 'each') && isWord(els[j + 1], 'around', 'across')) return { leave: 0, next: j + 2 };
   return null;
+}
+
+/** "across", "around", "remaining", "to end", "to last 2 sts" — but not "rep around". */
+function startsFill(els: El[], i: number): boolean {
+  return !isWord(els[i], 'rep') && readFill(els, i) !== null;
 }
 
 const NOUNS = new Set(['st', 'ch', 'sp', 'loops', 'loop']);
@@ -625,7 +632,7 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
     loop = (c.el as Tok).v as Loop;
     c.i++;
   }
-  if (inherit && (isWord(c.el, 'in', 'on', 'next', 'each') || isTok(c.el) && c.el.k === 'ord')) {
+  if (inherit && (isWord(c.el, 'in', 'on', 'next', 'each') || (isTok(c.el) && c.el.k === 'ord') || startsFill(c.els, c.i))) {
     entry = inherit.entry;
     word = inherit.word;
     incOf = inherit.incOf;
@@ -1079,7 +1086,11 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
   // Comment: no number, no bracket, no stitch and no action word ("pulling tight", "stuff as you go").
   const actiony = words.some(isActionWord);
   // "… and in each ch across": the stitch carries over from the clause before.
-  let inherit = r.lastSt && (sep === 'and' || sep === ',') && isWord(els[0], 'in', 'on', 'next', 'each') ? r.lastSt : null;
+  // "sc in 2nd ch from hook and across" / "… and to end" likewise, after "and" only ("…, around" is prose).
+  let inherit =
+    r.lastSt && ((sep === 'and' || sep === ',') && isWord(els[0], 'in', 'on', 'next', 'each') || (sep === 'and' && startsFill(els, 0)))
+      ? r.lastSt
+      : null;
   let stitchy = false;
   for (const e of els) {
     if (e.k === 'br' || isNum(e) || r.isStitchWord(e)) {
@@ -1483,7 +1494,8 @@ function takeStated(els: El[], r: Reader): { stated: number | null; col: number 
     const e = els[i];
     if (e.k === 'br') {
       const n = statedOf(e, r);
-      if (n !== null) {
+      // "(2 sc) in next st": a group with a target, not a count.
+      if (n !== null && !(isWord(els[i + 1], 'in', 'on') && !isWord(els[i + 2], 'all', 'total'))) {
         let tail = 0;
         for (const x of els.slice(i + 1)) if (notPunct(x) && !(x.k === 'br' && bracketKind(x, r).k === 'comment')) tail++;
         return { stated: n, col: e.col, cut: i, trailingFrom: tail ? i + 1 : null };

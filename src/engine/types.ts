@@ -45,7 +45,7 @@ export interface Round {
   stitches: number;
   /** Stitches of the previous round worked into, skipped ones included. */
   worked: number;
-  /** Count stated at the end of the line, or null. */
+  /** Count stated at the end of the line or in the label ("Round 5 (36 sts):"), or null. Of two that differ, the one the round makes, else the one at the end. */
   stated: number | null;
   /** Stitches made by type in US abbreviations, e.g. { sc: 18, hdc: 6 }. An inc counts as 2 of its base stitch, a dec/invdec as one sc2tog. */
   made: Record<string, number>;
@@ -54,7 +54,11 @@ export interface Round {
   problems: Problem[];
 }
 
-export type NoteKind = 'colour' | 'hook' | 'stuffing' | 'placement' | 'fasten-off' | 'other';
+/**
+ * 'join': "Join with sl st to first sc." on its own line — the end of the round before it (`afterRound`),
+ * making no stitch. Only given when a round comes before it.
+ */
+export type NoteKind = 'colour' | 'hook' | 'stuffing' | 'placement' | 'fasten-off' | 'join' | 'other';
 
 export interface Note {
   /** 0-based line index in the piece text. */

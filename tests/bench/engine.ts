@@ -84,3 +84,16 @@ measure('one line edited per run (keystroke)', (i) => {
   return copy.join('\n');
 }, 300);
 measure('every line new (paste)', () => pasted(), 200);
+// One slip early on (Rnd 12 leaves 2 unworked but states 60): every later round misses its stated count
+// from the computed 58 and is checked again from the stated 60 — the worst case for that second check.
+const slipAt = lines.findIndex((l) => l.startsWith('Rnd 12:'));
+const slipped = [...lines];
+slipped[slipAt] = 'Rnd 12: sc in next 58 sts (60)';
+const slippedPiece = slipped.join('\n');
+for (let i = 0; i < 50; i++) checkPiece(slippedPiece);
+measure('one slip early, every later round checked twice (keystroke)', (i) => {
+  const copy = [...slipped];
+  const at = 13 + (i % 270);
+  copy[at] = copy[at] + ' ';
+  return copy.join('\n');
+}, 300);

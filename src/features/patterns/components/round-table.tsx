@@ -4,6 +4,7 @@ import {
   CheckCircle2,
   Cloud,
   Info,
+  Link2,
   MapPin,
   Palette,
   RefreshCw,
@@ -19,6 +20,7 @@ const noteLook: Record<NoteKind, { word: string; icon: ReactNode }> = {
   stuffing: { word: 'Stuffing', icon: <Cloud aria-hidden className="h-4 w-4 shrink-0" /> },
   placement: { word: 'Placement', icon: <MapPin aria-hidden className="h-4 w-4 shrink-0" /> },
   'fasten-off': { word: 'Fasten off', icon: <Scissors aria-hidden className="h-4 w-4 shrink-0" /> },
+  join: { word: 'Join', icon: <Link2 aria-hidden className="h-4 w-4 shrink-0" /> },
   other: { word: 'Note', icon: <StickyNote aria-hidden className="h-4 w-4 shrink-0" /> },
 };
 
