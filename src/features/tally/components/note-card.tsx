@@ -12,8 +12,8 @@ const kinds: Record<NoteKind, { word: string; icon: typeof Info }> = {
   other: { word: 'Note', icon: Info },
 };
 
-export function noteTitle(due: DueNote, roundName: string) {
-  if (due.reason === 'copy') return 'New copy';
+export function noteTitle(due: DueNote, roundName: string): string | null {
+  if (due.reason === 'copy') return null;
   if (due.reason === 'end') return 'After the last round';
   if (due.reason === 'mark') return `Where it goes: at ${roundName}`;
   return `Before ${roundName}`;
@@ -39,7 +39,9 @@ export function NoteCard({
         <Icon aria-hidden className="h-5 w-5" />
         {k.word}
       </span>
-      <span className="block text-lg font-semibold opacity-80">{noteTitle(due, roundName)}</span>
+      {noteTitle(due, roundName) ? (
+        <span className="block text-lg font-semibold opacity-80">{noteTitle(due, roundName)}</span>
+      ) : null}
       <span className="block text-3xl leading-tight font-bold sm:text-4xl md:text-5xl">{due.note.text}</span>
       {due.note.kind === 'hook' && due.note.hookMm ? (
         <span className="block text-2xl font-semibold">Hook: {due.note.hookMm} mm</span>

@@ -77,8 +77,8 @@ function afterPaint(fn: () => void) {
   setTimeout(run, 100);
   if (typeof requestAnimationFrame !== 'function') return;
   requestAnimationFrame(() => {
-    const postTask = (globalThis as { scheduler?: { postTask?: PostTask } }).scheduler?.postTask;
-    if (postTask) void postTask(run, { priority: 'background' });
+    const scheduler = (globalThis as { scheduler?: { postTask?: PostTask } }).scheduler;
+    if (typeof scheduler?.postTask === 'function') void scheduler.postTask(run, { priority: 'background' });
     else setTimeout(run, 0);
   });
 }
