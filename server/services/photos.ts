@@ -5,8 +5,9 @@ import type { AppContext } from '../context.js';
 import { HttpError, notFound, type IssueOut } from '../lib/http-error.js';
 import { deletePhotoFiles, newStorageKey, writePhotoFiles } from '../lib/storage.js';
 import { imagePool } from '../workers/image-pool.js';
+import { isShowcaseOpen } from './share.js';
 import { PHOTO_LIMITS } from '../../src/schemas/journal.js';
-import type { ImageJob } from '../workers/image.js';
+import type { ImageFormat, ImageJob } from '../workers/image.js';
 
 // Photos: every upload is sniffed from its bytes, measured from its header before anything decodes it,
 // then resized off the request thread into two JPEGs without EXIF. The original is never kept.
@@ -53,22 +54,28 @@ export function photoOut(row: PhotoRow): PhotoOut {
 }
 
 /**
- * Who may see a photo, the one rule every photo-serving path uses (the /media route and the showcase):
- * its project's owner always; anyone else, signed in or not, only while the project is shared by link
- * or publicly. Everyone else gets the same 404 as for a photo that does not exist.
+ * Who may see a photo, the one rule every photo-serving path uses (the /media route serves every photo URL,
+ * the showcase's included): its project's owner while their account is open; anyone else, signed in or not,
+ * exactly while the project's showcase is open (isShowcaseOpen: shared by link or publicly, not taken down by
+ * an admin, owner not disabled), so a page that answers 404 never leaves its photos reachable. A disabled
+ * owner has no session, and their photos are served to no one. Everyone refused gets the same 404 as for a
+ * photo that does not exist.
  */
 export async function canViewPhoto(db: Knex, user: { id: string } | null | undefined, photo: Pick<PhotoRow, 'project_id'>) {
-  const project = await db('projects').where({ id: photo.project_id }).first('owner_id', 'visibility');
-  if (!project) return false;
+  const project = await db('projects as p')
+    .join('users as u', 'u.id', 'p.owner_id')
+    .where('p.id', photo.project_id)
+    .first('p.owner_id', 'u.disabled_at');
+  if (!project || project.disabled_at) return false;
   if (user && project.owner_id === user.id) return true;
-  return project.visibility === 'link' || project.visibility === 'public';
+  return isShowcaseOpen(db, photo.project_id);
 }
 
-/** Cache-Control for a photo: a shared project's photos may sit in shared caches, a private one's never. */
+/** Cache-Control for a photo: only one everybody may see can sit in shared caches. */
 export async function photoCacheControl(db: Knex, photo: Pick<PhotoRow, 'project_id'>) {
-  const project = await db('projects').where({ id: photo.project_id }).first('visibility');
-  // An hour either way, so that making a project private again takes effect in browsers within the hour.
-  return project?.visibility === 'private' || !project ? 'private, max-age=3600' : 'public, max-age=3600';
+  // An hour either way, so that making a project private again (or an admin's take-down) reaches browsers
+  // within the hour; the check above refuses new requests at once.
+  return (await isShowcaseOpen(db, photo.project_id)) ? 'public, max-age=3600' : 'private, max-age=3600';
 }
 
 export async function photoByKey(db: Knex, key: string): Promise<PhotoRow | undefined> {
@@ -89,7 +96,7 @@ interface Refusal {
   reason: string;
 }
 
-const WORKING_FORMATS = 'JPEG or PNG';
+const WORKING_FORMATS = 'JPEG, PNG or WebP';
 const name = (f: UploadedFile) => `“${f.originalname || 'unnamed file'}”`;
 
 /**
@@ -127,6 +134,23 @@ export function jpegIsComplete(buf: Uint8Array) {
   return false;
 }
 
+/**
+ * A WebP file is one RIFF chunk whose header states its size: the 4 bytes after "RIFF" hold the file's
+ * length minus 8, little-endian (RIFF container spec, developers.google.com/speed/webp/docs/riff_container).
+ * Fewer bytes than that means the file was cut short. Bytes after the chunk are tolerated, as for JPEG.
+ */
+function webpIsComplete(buf: Uint8Array) {
+  if (buf.length < 12) return false;
+  const riffSize = buf[4] | (buf[5] << 8) | (buf[6] << 16) | (buf[7] * 0x1000000);
+  return buf.length >= riffSize + 8;
+}
+
+/** The VP8X chunk's animation flag (bit 1 of its first byte; same spec): such a file is a clip, not a photo. */
+function webpIsAnimated(buf: Uint8Array) {
+  const vp8x = buf.length >= 21 && String.fromCharCode(buf[12], buf[13], buf[14], buf[15]) === 'VP8X';
+  return vp8x && (buf[20] & 0x02) !== 0;
+}
+
 /** PNG ends with an IEND chunk; a file cut short has none (PNG spec, 11.2.5). */
 function pngIsComplete(buf: Uint8Array) {
   const iend = [0x49, 0x45, 0x4e, 0x44];
@@ -135,6 +159,8 @@ function pngIsComplete(buf: Uint8Array) {
   }
   return false;
 }
+
+const COMPLETE: Record<ImageFormat, (buf: Uint8Array) => boolean> = { jpg: jpegIsComplete, png: pngIsComplete, webp: webpIsComplete };
 
 export async function checkUpload(file: UploadedFile): Promise<Refusal | null> {
   const buf = file.buffer;
@@ -155,15 +181,10 @@ export async function checkUpload(file: UploadedFile): Promise<Refusal | null> {
       reason: `${name(file)} is a ${type.ext.toUpperCase()} photo, which Whorlbook cannot read. Photos work as ${WORKING_FORMATS}; on an iPhone, set Camera › Formats to "Most Compatible", or add it through Whorlbook's photo picker, which converts it.`,
     };
   }
-  if (type.ext === 'webp') {
-    return {
-      status: 415,
-      reason: `${name(file)} is a WebP image, which the server cannot read yet. Photos work as ${WORKING_FORMATS}; adding it through Whorlbook's photo picker converts it for you.`,
-    };
-  }
-  if (type.ext !== 'jpg' && type.ext !== 'png') {
+  if (type.ext !== 'jpg' && type.ext !== 'png' && type.ext !== 'webp') {
     return { status: 415, reason: `${name(file)} is a ${type.ext.toUpperCase()} file, not a photo Whorlbook can read. Photos work as ${WORKING_FORMATS}.` };
   }
+  const format: ImageFormat = type.ext;
 
   let size: { width?: number; height?: number };
   try {
@@ -180,10 +201,19 @@ export async function checkUpload(file: UploadedFile): Promise<Refusal | null> {
       reason: `${name(file)} is ${width} × ${height} pixels; Whorlbook takes photos up to ${PHOTO_LIMITS.maxMegapixels} megapixels and ${PHOTO_LIMITS.maxSide.toLocaleString('en')} pixels a side. Choose a smaller copy.`,
     };
   }
-  if (type.ext === 'jpg' ? !jpegIsComplete(buf) : !pngIsComplete(buf)) {
+  if (!COMPLETE[format](buf)) {
     return { status: 422, reason: `${name(file)} is cut off: the file ends before the picture does. Copy the photo again and retry.` };
   }
+  if (format === 'webp' && webpIsAnimated(buf)) {
+    return { status: 415, reason: `${name(file)} is an animated WebP, not a still photo. Choose a photo, or save one frame of it as a picture first.` };
+  }
   return null;
+}
+
+/** The format the bytes start with, for a file checkUpload has already passed. */
+function sniffedFormat(buf: Uint8Array): ImageFormat {
+  if (buf[0] === 0xff) return 'jpg';
+  return buf[0] === 0x89 ? 'png' : 'webp';
 }
 
 function refuse(files: UploadedFile[], refusals: Array<Refusal | null>): never {
@@ -236,7 +266,7 @@ export async function addPhotos(
 
   const jobs: ImageJob[] = files.map((f) => ({
     bytes: new Uint8Array(f.buffer.buffer, f.buffer.byteOffset, f.buffer.byteLength),
-    format: f.buffer[0] === 0xff ? 'jpg' : 'png',
+    format: sniffedFormat(f.buffer),
     displayLongSide: PHOTO_LIMITS.displayLongSide,
     thumbSide: PHOTO_LIMITS.thumbSide,
   }));

@@ -1,12 +1,53 @@
-import { Jimp } from 'jimp';
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { createJimp } from '@jimp/core';
+import decodeWebp, { init as initWebpDecoder } from '@jsquash/webp/decode.js';
+import { defaultFormats, defaultPlugins } from 'jimp';
 
 // Runs inside a piscina worker thread (see image-pool.ts): Jimp is pure JavaScript and holds a core for
 // seconds on a phone photo, which must never happen on the thread that answers requests.
 
+// WebP: libwebp's decoder compiled to wasm (@jsquash/webp, the decoder @jimp/wasm-webp wraps). The format
+// is our own rather than @jimp/wasm-webp's, for two reasons found here (Node 20, tsx 4.23, piscina 5):
+// that plugin calls @jsquash's init() with no arguments on every picture, and this Emscripten glue is the
+// browser build, which loads its .wasm with fetch() on a file: URL — Node's fetch refuses ("not implemented");
+// and a static import of '@jimp/wasm-webp' in this worker makes tsx's loader give up on the worker file
+// itself (ERR_UNKNOWN_FILE_EXTENSION). So the decoder gets the module compiled from the .wasm on disk, as
+// @jsquash's README ("Manual WASM initialisation") describes. Whorlbook only reads WebP; it writes JPEG.
+const require = createRequire(import.meta.url);
+let webpWasm: Promise<WebAssembly.Module> | undefined;
+// The package's .d.ts lists only the options form; its code also takes a compiled WebAssembly.Module.
+const initWithModule = initWebpDecoder as unknown as (module: WebAssembly.Module) => Promise<void>;
+
+async function decodeWebpBitmap(data: Buffer) {
+  webpWasm ??= WebAssembly.compile(readFileSync(require.resolve('@jsquash/webp/codec/dec/webp_dec.wasm')));
+  // A fresh instance per picture (instantiating a compiled module takes about a millisecond): wasm memory
+  // only grows, so one instance kept for the worker's life would hold the largest photo's pixels ever decoded.
+  await initWithModule(await webpWasm);
+  const image = await decodeWebp(data.buffer.slice(data.byteOffset, data.byteOffset + data.byteLength) as ArrayBuffer);
+  // The decoder hands back a copy outside wasm memory, so the instance can go once this returns.
+  return { data: Buffer.from(image.data.buffer, image.data.byteOffset, image.data.byteLength), width: image.width, height: image.height };
+}
+
+function webpFormat() {
+  return {
+    mime: 'image/webp' as const,
+    hasAlpha: true,
+    decode: decodeWebpBitmap,
+    encode: (): Buffer => {
+      throw new Error('Whorlbook writes JPEG only');
+    },
+  };
+}
+
+const Jimp = createJimp({ formats: [...defaultFormats, webpFormat], plugins: defaultPlugins });
+
+export type ImageFormat = 'jpg' | 'png' | 'webp';
+
 export interface ImageJob {
   bytes: Uint8Array;
-  /** From sniffing the bytes: only PNG can carry transparency worth flattening. */
-  format?: 'jpg' | 'png';
+  /** From sniffing the bytes: JPEG cannot carry transparency, so only PNG and WebP are checked for it. */
+  format?: ImageFormat;
   displayLongSide: number;
   thumbSide: number;
 }
@@ -23,12 +64,13 @@ export interface ImageResult {
 // Quality 82/78: visually clean for crochet texture at phone sizes, roughly a third of q95's bytes (common practice).
 const DISPLAY_QUALITY = 82;
 const THUMB_QUALITY = 78;
-// Transparent PNG areas become oat (our page background) rather than JPEG's black.
+// Transparent PNG and WebP areas become oat (our page background) rather than JPEG's black.
 const OAT = 0xf7f1e6ff;
 
 export default async function processImage(job: ImageJob): Promise<ImageResult> {
   const started = performance.now();
-  // Jimp.read turns the picture upright from its EXIF orientation; the pixels are all we keep.
+  // Jimp.read turns a JPEG upright from its EXIF orientation (its EXIF reader knows only JPEG); the pixels
+  // are all we keep.
   let image = await Jimp.read(Buffer.from(job.bytes.buffer, job.bytes.byteOffset, job.bytes.byteLength));
   const { width, height } = image.bitmap;
   if (!width || !height) throw new Error('the picture has no pixels');

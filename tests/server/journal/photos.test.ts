@@ -10,7 +10,9 @@ import { signedInAgent } from '../../factories/users.js';
 import { createProject, setVisibility } from '../../factories/journal.js';
 import { makeJpeg, makePng, pngDeclaring, withExif } from '../../factories/images.js';
 import { binary, filesUnder, photoCount } from './helpers.js';
+import { MOSS_RGB, OAT_RGB, makeWebp, webpDeclaring } from './webp.js';
 import { closeImagePool } from '../../../server/workers/image-pool.js';
+import { canViewPhoto } from '../../../server/services/photos.js';
 
 let t: TestContext;
 let owner: Awaited<ReturnType<typeof signedInAgent>>;
@@ -139,6 +141,56 @@ describe('uploading photos to an entry', () => {
   });
 });
 
+describe('WebP photos', () => {
+  it('takes a WebP and serves a 1600 px JPEG display copy and a 400 px JPEG thumbnail, the right way up', async () => {
+    const data = await makeWebp({ width: 2400, height: 1800 });
+    // The test file really is a WebP (RIFF…WEBP), or this would prove nothing.
+    expect(data.subarray(0, 4).toString('ascii')).toBe('RIFF');
+    expect(data.subarray(8, 12).toString('ascii')).toBe('WEBP');
+    const res = await upload([{ data, name: 'on-the-sill.webp', type: 'image/webp' }]);
+    expect(res.status).toBe(201);
+    const p = res.body.photos[0];
+    expect([p.width, p.height]).toEqual([1600, 1200]);
+    expect(p.url).toMatch(/^\/media\/photos\/[A-Za-z0-9_-]{24}\/display\.jpg$/);
+
+    const display = await fetchImage(p.url);
+    expect(display.headers['content-type']).toBe('image/jpeg');
+    expect(display.body.subarray(0, 3)).toEqual(Buffer.from([0xff, 0xd8, 0xff]));
+    const img = await Jimp.read(display.body);
+    expect([img.bitmap.width, img.bitmap.height]).toEqual([1600, 1200]);
+    // The red block stays in the top-left corner: the pixels are the picture's, not a blank or a flip.
+    const topLeft = intToRGBA(img.getPixelColor(20, 20));
+    const bottomRight = intToRGBA(img.getPixelColor(1580, 1180));
+    expect(topLeft.r).toBeGreaterThan(200);
+    expect(topLeft.b).toBeLessThan(60);
+    expect(bottomRight.b).toBeGreaterThan(200);
+    expect(bottomRight.r).toBeLessThan(60);
+
+    const thumb = await fetchImage(p.thumbUrl);
+    expect(thumb.body.subarray(0, 3)).toEqual(Buffer.from([0xff, 0xd8, 0xff]));
+    const th = await Jimp.read(thumb.body);
+    expect([th.bitmap.width, th.bitmap.height]).toEqual([400, 400]);
+  });
+
+  it('flattens a WebP’s transparent areas onto oat, not black', async () => {
+    const data = await makeWebp({ width: 200, height: 100, transparentLeft: true, lossless: true });
+    const res = await upload([{ data, name: 'cut-out.webp', type: 'image/webp' }]);
+    expect(res.status).toBe(201);
+    const img = await Jimp.read((await fetchImage(res.body.photos[0].url)).body);
+    const near = (px: { r: number; g: number; b: number }, rgb: readonly number[]) =>
+      // JPEG re-encoding moves colours a little; a few levels either way is still the same colour.
+      Math.max(Math.abs(px.r - rgb[0]), Math.abs(px.g - rgb[1]), Math.abs(px.b - rgb[2]));
+    expect(near(intToRGBA(img.getPixelColor(40, 50)), OAT_RGB)).toBeLessThanOrEqual(8);
+    expect(near(intToRGBA(img.getPixelColor(160, 50)), MOSS_RGB)).toBeLessThanOrEqual(8);
+  });
+
+  it('takes a lossless WebP too', async () => {
+    const res = await upload([{ data: await makeWebp({ width: 120, height: 90, lossless: true }), name: 'lossless.webp', type: 'image/webp' }]);
+    expect(res.status).toBe(201);
+    expect([res.body.photos[0].width, res.body.photos[0].height]).toEqual([120, 90]);
+  });
+});
+
 describe('refusing bad files, clearly, with the server still healthy', () => {
   const refused = async (files: Parameters<typeof upload>[0], status: number, pattern: RegExp) => {
     const photosBefore = await photoCount(t.db);
@@ -155,7 +207,7 @@ describe('refusing bad files, clearly, with the server still healthy', () => {
   };
 
   it('a text file named .jpg → 415 naming the file and the formats that work', async () => {
-    await refused([{ data: Buffer.from('Rnd 1: MR, 6 sc (6)\nRnd 2: inc x6 (12)\n'), name: 'pattern-notes.jpg' }], 415, /“pattern-notes\.jpg” is not a photo[\s\S]*JPEG or PNG/);
+    await refused([{ data: Buffer.from('Rnd 1: MR, 6 sc (6)\nRnd 2: inc x6 (12)\n'), name: 'pattern-notes.jpg' }], 415, /“pattern-notes\.jpg” is not a photo[\s\S]*JPEG, PNG or WebP/);
   });
 
   it('a truncated JPEG → 422 "cut off"', async () => {
@@ -172,6 +224,21 @@ describe('refusing bad files, clearly, with the server still healthy', () => {
     const png = pngDeclaring(20_000, 20_000);
     expect(png.length).toBeLessThan(200);
     await refused([{ data: png, name: 'huge.png', type: 'image/png' }], 422, /“huge\.png” is 20000 × 20000 pixels[\s\S]*40 megapixels/);
+  });
+
+  it('a WebP whose VP8X header declares 20000 × 20000 px → 422 before anything decodes it', async () => {
+    const webp = await webpDeclaring(20_000, 20_000);
+    expect(webp.length).toBeLessThan(400);
+    await refused([{ data: webp, name: 'huge.webp', type: 'image/webp' }], 422, /“huge\.webp” is 20000 × 20000 pixels[\s\S]*40 megapixels/);
+  });
+
+  it('a truncated WebP → 422 "cut off"', async () => {
+    const webp = await makeWebp({ width: 300, height: 200 });
+    await refused([{ data: webp.subarray(0, Math.floor(webp.length * 0.7)), name: 'half.webp', type: 'image/webp' }], 422, /“half\.webp” is cut off/);
+  });
+
+  it('an animated WebP → 415 asking for a still photo', async () => {
+    await refused([{ data: await webpDeclaring(16, 16, { flags: 0x02 }), name: 'wave.webp', type: 'image/webp' }], 415, /“wave\.webp” is an animated WebP/);
   });
 
   it('a 9000 × 5000 picture (45 megapixels, each side allowed) → 422 on the megapixel limit', async () => {
@@ -199,7 +266,7 @@ describe('refusing bad files, clearly, with the server still healthy', () => {
   it('a HEIC photo → 415 saying which formats work', async () => {
     // An ISO-BMFF "ftyp" box with the heic brand (ISO/IEC 23008-12), the start of every HEIC file.
     const heic = Buffer.concat([Buffer.from([0, 0, 0, 0x18]), Buffer.from('ftypheic'), Buffer.from([0, 0, 0, 0]), Buffer.from('mif1heic'), Buffer.alloc(200)]);
-    await refused([{ data: heic, name: 'IMG_0420.HEIC', type: 'image/heic' }], 415, /“IMG_0420\.HEIC” is a HEIC photo[\s\S]*JPEG or PNG/);
+    await refused([{ data: heic, name: 'IMG_0420.HEIC', type: 'image/heic' }], 415, /“IMG_0420\.HEIC” is a HEIC photo[\s\S]*JPEG, PNG or WebP/);
   });
 
   it('one bad file in a batch refuses the whole request and says exactly which file failed', async () => {
@@ -286,6 +353,52 @@ describe('who can see a photo', () => {
     expect((await other.agent.get(photo.thumbUrl)).status).toBe(200);
     await setVisibility(t.db, privateProject.id, 'private');
     expect((await request(t.app).get(photo.url)).status).toBe(404);
+  });
+
+  it('a shared project whose showcase an admin took down serves its photos to the owner only, privately cached', async () => {
+    await setVisibility(t.db, privateProject.id, 'link');
+    expect((await request(t.app).get(photo.url)).status).toBe(200);
+    await t.db('projects').where({ id: privateProject.id }).update({ showcase_hidden_at: new Date().toISOString(), showcase_hidden_by: other.user.id });
+    try {
+      for (const url of [photo.url, photo.thumbUrl]) {
+        expect((await request(t.app).get(url)).status).toBe(404);
+        expect((await other.agent.get(url)).status).toBe(404);
+      }
+      const own = await fetchImage(photo.url);
+      expect(own.status).toBe(200);
+      // The owner's copy must not sit in a shared cache where a visitor could still be handed it.
+      expect(own.headers['cache-control']).toBe('private, max-age=3600');
+    } finally {
+      await t.db('projects').where({ id: privateProject.id }).update({ showcase_hidden_at: null, showcase_hidden_by: null });
+      await setVisibility(t.db, privateProject.id, 'private');
+    }
+  });
+
+  it('a disabled owner’s photos are served to no one, though the project is public', async () => {
+    const maker = await signedInAgent(t.app, t.db);
+    const shared = await createProject(t.db, maker.user.id, { title: 'Shared then closed', visibility: 'public' });
+    const entry = await maker.agent.post(`/api/projects/${shared.id}/entries`).send({ body: 'Done.', entryDate: '2026-12-02' });
+    const up = await upload([{ data: await makeJpeg({ width: 80, height: 60 }), name: 'done.jpg' }], maker.agent, entry.body.entry.id);
+    expect(up.status).toBe(201);
+    const p = up.body.photos[0];
+    expect((await request(t.app).get(p.url)).status).toBe(200);
+    const row = await t.db('photos').where({ id: p.id }).first();
+    expect(await canViewPhoto(t.db, { id: maker.user.id }, row)).toBe(true);
+
+    const admin = await signedInAgent(t.app, t.db, { role: 'admin' });
+    expect((await admin.agent.post(`/api/admin/users/${maker.user.id}/disable`)).status).toBe(200);
+    for (const url of [p.url, p.thumbUrl]) {
+      expect((await request(t.app).get(url)).status).toBe(404);
+      expect((await other.agent.get(url)).status).toBe(404);
+      expect((await maker.agent.get(url)).status).toBe(404);
+    }
+    // Not only because a disabled member's session is refused: the rule itself says no, even to the owner.
+    expect(await canViewPhoto(t.db, { id: maker.user.id }, row)).toBe(false);
+    expect(await canViewPhoto(t.db, null, row)).toBe(false);
+
+    // And it is the account's state that decides: opened again, the public photo is public again.
+    expect((await admin.agent.post(`/api/admin/users/${maker.user.id}/enable`)).status).toBe(200);
+    expect((await request(t.app).get(p.url)).status).toBe(200);
   });
 
   it('another member cannot add photos to, or change, someone else’s entry and photo', async () => {
