@@ -6,7 +6,8 @@
 export interface Position {
   /** 1-based copy ("Ear 2 of 2"). */
   copy: number;
-  /** 0-based index into the stitch engine's rounds for the piece (not the round's label number). */
+  /** 0-based index into the stitch engine's rounds for the piece (not the round's label number); equal to the
+   * number of rounds once the last copy is finished. */
   round: number;
   /** Steps done in this round (0 … steps in the round). */
   step: number;
@@ -24,29 +25,34 @@ export const startPosition: Position = { copy: 1, round: 0, step: 0 };
  * A round the engine could not split into steps (an unusual stitch, a line it only partly read) still has to be
  * worked: it counts as one step, finished with one tap or "round done".
  */
-export function shapeOf(rounds: ReadonlyArray<{ steps: ReadonlyArray<unknown> }>, copies: number): PieceShape {
+export function shapeOf(
+  rounds: ReadonlyArray<{ steps: ReadonlyArray<unknown> }>,
+  copies: number,
+): PieceShape {
   return { copies: Math.max(1, copies), stepsPerRound: rounds.map((r) => Math.max(1, r.steps.length)) };
 }
 
 export const stepsPerCopy = (shape: PieceShape) => shape.stepsPerRound.reduce((a, b) => a + b, 0);
 export const totalSteps = (shape: PieceShape) => stepsPerCopy(shape) * shape.copies;
 
-const lastRound = (shape: PieceShape) => shape.stepsPerRound.length - 1;
-
-/** Every round of every copy counted (a piece with no rounds has nothing to count and is "finished"). */
+/**
+ * Every round of every copy counted. The finished position is just past the last round of the last copy
+ * (round = the number of rounds, step 0), so "rounds done" and "copies done" read straight off it.
+ */
 export function isFinished(shape: PieceShape, p: Position): boolean {
-  const last = lastRound(shape);
-  if (last < 0) return true;
-  return p.copy >= shape.copies && p.round >= last && p.step >= shape.stepsPerRound[last];
+  const rounds = shape.stepsPerRound.length;
+  if (rounds === 0) return true;
+  if (p.copy < shape.copies) return false;
+  return p.round >= rounds || (p.round === rounds - 1 && p.step >= shape.stepsPerRound[rounds - 1]);
 }
 
-/** A completed round moves on to the next round (or the next copy); only the very end stays "all done". */
+/** A completed round moves on to the next round (or the next copy); after the very last one, past the end. */
 export function normalize(shape: PieceShape, p: Position): Position {
-  const last = lastRound(shape);
-  if (last < 0) return { ...startPosition };
+  const rounds = shape.stepsPerRound.length;
+  if (rounds === 0) return { ...startPosition };
   let { copy, round, step } = p;
-  while (step >= shape.stepsPerRound[round]) {
-    if (round < last) {
+  while (round < rounds && step >= shape.stepsPerRound[round]) {
+    if (round < rounds - 1) {
       round += 1;
       step = 0;
     } else if (copy < shape.copies) {
@@ -54,8 +60,8 @@ export function normalize(shape: PieceShape, p: Position): Position {
       round = 0;
       step = 0;
     } else {
-      step = shape.stepsPerRound[round];
-      break;
+      round = rounds;
+      step = 0;
     }
   }
   return { copy, round, step };
@@ -63,10 +69,12 @@ export function normalize(shape: PieceShape, p: Position): Position {
 
 /** Brings a stored position back inside the piece, e.g. after its instructions were shortened. */
 export function clampPosition(shape: PieceShape, p: Position): Position {
-  const last = lastRound(shape);
-  if (last < 0) return { ...startPosition };
+  const rounds = shape.stepsPerRound.length;
+  if (rounds === 0) return { ...startPosition };
   const copy = Math.min(Math.max(1, p.copy), shape.copies);
-  const round = Math.min(Math.max(0, p.round), last);
+  if (p.round >= rounds)
+    return copy === shape.copies ? { copy, round: rounds, step: 0 } : { copy: copy + 1, round: 0, step: 0 };
+  const round = Math.max(0, p.round);
   const step = Math.min(Math.max(0, p.step), shape.stepsPerRound[round]);
   return normalize(shape, { copy, round, step });
 }
@@ -90,27 +98,35 @@ export function finishRound(shape: PieceShape, p: Position): Position | null {
   return normalize(shape, { ...p, step: shape.stepsPerRound[p.round] });
 }
 
-/** One step back, across a round or copy boundary; null at the very start. */
+/** One step back, across a round or copy boundary (or from the end); null at the very start. */
 export function stepBack(shape: PieceShape, p: Position): Position | null {
-  if (shape.stepsPerRound.length === 0) return null;
+  const rounds = shape.stepsPerRound.length;
+  if (rounds === 0) return null;
+  if (p.round >= rounds)
+    return { copy: p.copy, round: rounds - 1, step: shape.stepsPerRound[rounds - 1] - 1 };
   if (p.step > 0) return { ...p, step: p.step - 1 };
   if (p.round > 0) return { copy: p.copy, round: p.round - 1, step: shape.stepsPerRound[p.round - 1] - 1 };
-  if (p.copy > 1) {
-    const last = lastRound(shape);
-    return { copy: p.copy - 1, round: last, step: shape.stepsPerRound[last] - 1 };
-  }
+  if (p.copy > 1) return { copy: p.copy - 1, round: rounds - 1, step: shape.stepsPerRound[rounds - 1] - 1 };
   return null;
 }
 
 /** Why a jump target is outside the piece, in a sentence, or null when it is fine. */
-export function targetProblem(shape: PieceShape, to: Position, roundLabel: (index: number) => string = (i) => `round ${i + 1}`): string | null {
+export function targetProblem(
+  shape: PieceShape,
+  to: Position,
+  roundLabel: (index: number) => string = (i) => `round ${i + 1}`,
+): string | null {
   const rounds = shape.stepsPerRound.length;
   if (rounds === 0) return 'This piece has no rounds to jump to yet.';
-  if (to.copy > shape.copies) return `This piece is made ${shape.copies === 1 ? 'once' : `${shape.copies} times`}, so there is no copy ${to.copy}.`;
-  if (to.round >= rounds) return `This piece has ${rounds} round${rounds === 1 ? '' : 's'} (round index 0 to ${rounds - 1}), so there is no round index ${to.round}.`;
+  if (to.copy > shape.copies)
+    return `This piece is made ${shape.copies === 1 ? 'once' : `${shape.copies} times`}, so there is no copy ${to.copy}.`;
+  if (to.round >= rounds)
+    return `This piece has ${rounds} round${rounds === 1 ? '' : 's'} (round index 0 to ${rounds - 1}), so there is no round index ${to.round}.`;
   const steps = shape.stepsPerRound[to.round];
-  if (to.step > steps) return `${roundLabel(to.round)} has ${steps} step${steps === 1 ? '' : 's'}, so step ${to.step} is past its end.`;
+  if (to.step > steps)
+    return `${roundLabel(to.round)} has ${steps} step${steps === 1 ? '' : 's'}, so step ${to.step} is past its end.`;
   return null;
 }
 
-export const samePosition = (a: Position, b: Position) => a.copy === b.copy && a.round === b.round && a.step === b.step;
+export const samePosition = (a: Position, b: Position) =>
+  a.copy === b.copy && a.round === b.round && a.step === b.step;

@@ -17,7 +17,7 @@ describe('what the Tally shows before the server answers', () => {
 
   it('stops at the end of the last copy', () => {
     expect(foldPending(shape, at(2, 2, 3), [], [tap('step'), tap('step'), tap('step')]).position).toEqual(
-      at(2, 2, 4),
+      at(2, 3, 0),
     );
   });
 

@@ -16,7 +16,10 @@ afterAll(() => t.close());
 describe('the demo', () => {
   it('opens the Body mid-piece at Rnd 10 with the eye spots marked, and counts on from there', async () => {
     const agent = request.agent(t.app);
-    await agent.post('/api/auth/signin').send({ email: DEMO_MAKER.email, password: DEMO_MAKER.password }).expect(200);
+    await agent
+      .post('/api/auth/signin')
+      .send({ email: DEMO_MAKER.email, password: DEMO_MAKER.password })
+      .expect(200);
     const body = await t.db('project_pieces').where({ name: 'Body' }).first();
     const rounds = checkPiece(demoPattern.pieces[0].instructions).rounds;
     expect(rounds[9].number).toBe(10);
@@ -30,7 +33,12 @@ describe('the demo', () => {
       ['right eye', 9],
     ]);
     // Nothing to undo in a seeded position: the history starts with the maker's own taps.
-    expect((await agent.post(`/api/pieces/${body.id}/progress`).send({ opId: newOpId(), action: 'undo' })).status).toBe(409);
-    expect((await agent.post(`/api/pieces/${body.id}/progress`).send({ opId: newOpId(), action: 'step' })).body.progress).toMatchObject({ step: 10, done: before + 10 });
+    expect(
+      (await agent.post(`/api/pieces/${body.id}/progress`).send({ opId: newOpId(), action: 'undo' })).status,
+    ).toBe(409);
+    expect(
+      (await agent.post(`/api/pieces/${body.id}/progress`).send({ opId: newOpId(), action: 'step' })).body
+        .progress,
+    ).toMatchObject({ step: 10, done: before + 10 });
   });
 });

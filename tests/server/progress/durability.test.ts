@@ -22,9 +22,16 @@ afterAll(async () => {
 const longPiece = ['Rnd 1: 6 sc in MR (6)', 'Rnd 2: inc x6 (12)', 'Rnds 3-30: sc around (12)'].join('\n');
 
 async function signIn(url: string, email: string, password: string) {
-  const res = await fetch(`${url}/api/auth/signin`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password }) });
+  const res = await fetch(`${url}/api/auth/signin`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
   expect(res.status).toBe(200);
-  return res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  return res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
 }
 
 describe('durability', () => {
@@ -67,7 +74,11 @@ describe('durability', () => {
       }
     };
     await Promise.all([worker(), worker(), worker(), worker()]);
-    await new Promise<void>((resolve) => (first.child.exitCode !== null || first.child.signalCode ? resolve() : first.child.once('exit', () => resolve())));
+    await new Promise<void>((resolve) =>
+      first.child.exitCode !== null || first.child.signalCode
+        ? resolve()
+        : first.child.once('exit', () => resolve()),
+    );
     expect(first.child.signalCode).toBe('SIGKILL');
     expect(acked.length).toBeGreaterThanOrEqual(KILL_AFTER);
 
@@ -78,7 +89,12 @@ describe('durability', () => {
     const { progress } = (await res.json()) as { progress: { done: number; version: number } };
 
     const file = new Database(databaseFile(dataDir), { readonly: true });
-    const kept = new Set(file.prepare('select op_id from progress_events where piece_id = ?').all(pieceId).map((r: any) => r.op_id as string));
+    const kept = new Set(
+      file
+        .prepare('select op_id from progress_events where piece_id = ?')
+        .all(pieceId)
+        .map((r: any) => r.op_id as string),
+    );
     file.close();
     const lost = acked.filter((id) => !kept.has(id));
     expect(lost).toEqual([]);

@@ -12,7 +12,9 @@ afterAll(() => t.close());
 
 async function maker(copies = 2) {
   const { agent, user } = await signedInAgent(t.app, t.db);
-  const { pieceIds } = await createTallyProject(t.db, user.id, [{ name: 'Ear', instructions: ballTop, copies }]);
+  const { pieceIds } = await createTallyProject(t.db, user.id, [
+    { name: 'Ear', instructions: ballTop, copies },
+  ]);
   return { agent, user, pieceId: pieceIds[0], url: `/api/pieces/${pieceIds[0]}/placements` };
 }
 
@@ -21,7 +23,9 @@ describe('placements', () => {
     const m = await maker();
     const later = await m.agent.post(m.url).send({ round: 3, step: 4, copy: 1, label: 'right eye' });
     expect(later.status).toBe(201);
-    const first = await m.agent.post(m.url).send({ round: 2, step: 10, copy: 1, label: '  left eye ', note: '6 sts apart' });
+    const first = await m.agent
+      .post(m.url)
+      .send({ round: 2, step: 10, copy: 1, label: '  left eye ', note: '6 sts apart' });
     expect(first.status).toBe(201);
     expect(first.body.placement).toEqual({
       id: expect.any(Number),
@@ -40,7 +44,9 @@ describe('placements', () => {
 
   it('puts a mark without a copy on the copy the Tally is on', async () => {
     const m = await maker();
-    await m.agent.post(`/api/pieces/${m.pieceId}/progress`).send({ opId: newOpId(), action: 'set', to: { copy: 2, round: 1, step: 0 } });
+    await m.agent
+      .post(`/api/pieces/${m.pieceId}/progress`)
+      .send({ opId: newOpId(), action: 'set', to: { copy: 2, round: 1, step: 0 } });
     const res = await m.agent.post(m.url).send({ round: 2, label: 'arm' });
     expect(res.body.placement).toMatchObject({ copy: 2, step: null, note: null });
   });

@@ -47,7 +47,9 @@ describe('GET /api/pieces/:pieceId/progress', () => {
     const m = await maker();
     const res = await m.agent.get(m.url);
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ progress: { copy: 1, round: 0, step: 0, done: 0, version: 0, updatedAt: null } });
+    expect(res.body).toEqual({
+      progress: { copy: 1, round: 0, step: 0, done: 0, version: 0, updatedAt: null },
+    });
   });
 });
 
@@ -60,15 +62,15 @@ describe('POST /api/pieces/:pieceId/progress: step', () => {
         const res = await m.post({ action: 'step', at: new Date().toISOString() });
         expect(res.status).toBe(200);
         done += 1;
-        const last = r === ball.length - 1 && s === ball[r] - 1;
-        const expected = last ? { round: r, step: ball[r] } : s === ball[r] - 1 ? { round: r + 1, step: 0 } : { round: r, step: s + 1 };
+        // The last step of the last round moves the Tally past the end: round index = number of rounds.
+        const expected = s === ball[r] - 1 ? { round: r + 1, step: 0 } : { round: r, step: s + 1 };
         expect(res.body.progress).toMatchObject({ copy: 1, ...expected, done, version: done });
         expect(typeof res.body.progress.updatedAt).toBe('string');
       }
     }
     expect(done).toBe(perCopy);
     const again = await m.agent.get(m.url);
-    expect(again.body.progress).toMatchObject({ copy: 1, round: ball.length - 1, step: ball.at(-1), done: perCopy });
+    expect(again.body.progress).toMatchObject({ copy: 1, round: ball.length, step: 0, done: perCopy });
   });
 
   it('keeps the event log: one row per applied tap with the position before and after', async () => {
@@ -95,7 +97,9 @@ describe('exactly once', () => {
     expect(third.status).toBe(200);
     expect(second.body.progress).toEqual(first.body.progress);
     expect(third.body.progress).toMatchObject({ done: 1, version: 1 });
-    expect(await t.db('progress_events').where({ piece_id: m.pieceId }).count({ n: '*' }).first()).toEqual({ n: 1 });
+    expect(await t.db('progress_events').where({ piece_id: m.pieceId }).count({ n: '*' }).first()).toEqual({
+      n: 1,
+    });
   });
 
   it('answers a retry with the current position even after later taps', async () => {
@@ -110,7 +114,9 @@ describe('exactly once', () => {
   it('applies twenty concurrent copies of one opId once', async () => {
     const m = await maker();
     const opId = newOpId();
-    const answers = await Promise.all(Array.from({ length: 20 }, () => m.agent.post(m.url).send({ opId, action: 'step' })));
+    const answers = await Promise.all(
+      Array.from({ length: 20 }, () => m.agent.post(m.url).send({ opId, action: 'step' })),
+    );
     expect(answers.map((a) => a.status)).toEqual(Array(20).fill(200));
     for (const a of answers) expect(a.body.progress.done).toBe(1);
     const now = await m.agent.get(m.url);
@@ -135,17 +141,31 @@ describe('undo', () => {
     expect((await m.agent.get(m.url)).body.progress).toMatchObject({ round: 1, step: 0, done: ball[0] });
     const undo = await m.post({ action: 'undo' });
     expect(undo.status).toBe(200);
-    expect(undo.body.progress).toMatchObject({ copy: 1, round: 0, step: ball[0] - 1, done: ball[0] - 1, version: ball[0] + 1 });
+    expect(undo.body.progress).toMatchObject({
+      copy: 1,
+      round: 0,
+      step: ball[0] - 1,
+      done: ball[0] - 1,
+      version: ball[0] + 1,
+    });
   });
 
   it('goes back across a copy boundary', async () => {
     const m = await maker([{ name: 'Ear', instructions: ballTop, copies: 2 }]);
-    const r = await m.post({ action: 'set', to: { copy: 1, round: ball.length - 1, step: ball.at(-1)! - 1 } });
+    const r = await m.post({
+      action: 'set',
+      to: { copy: 1, round: ball.length - 1, step: ball.at(-1)! - 1 },
+    });
     expect(r.body.progress).toMatchObject({ copy: 1, round: ball.length - 1 });
     const last = await m.post({ action: 'step' });
     expect(last.body.progress).toMatchObject({ copy: 2, round: 0, step: 0, done: perCopy });
     const undo = await m.post({ action: 'undo' });
-    expect(undo.body.progress).toMatchObject({ copy: 1, round: ball.length - 1, step: ball.at(-1)! - 1, done: perCopy - 1 });
+    expect(undo.body.progress).toMatchObject({
+      copy: 1,
+      round: ball.length - 1,
+      step: ball.at(-1)! - 1,
+      done: perCopy - 1,
+    });
   });
 
   it('reverts the most recent event still counting, one after another, and never an undo itself', async () => {
@@ -241,15 +261,23 @@ describe('the end of the piece', () => {
     await m.post({ action: 'set', to: { copy: 2, round: ball.length - 1, step: ball.at(-1)! - 1 } });
     const last = await m.post({ action: 'step' });
     expect(last.status).toBe(200);
-    expect(last.body.progress).toMatchObject({ copy: 2, round: ball.length - 1, step: ball.at(-1), done: 2 * perCopy });
+    expect(last.body.progress).toMatchObject({ copy: 2, round: ball.length, step: 0, done: 2 * perCopy });
     const past = await m.post({ action: 'step' });
     expect(past.status).toBe(409);
     expect(past.body.error).toMatch(/last stitch of its last copy/);
     const round = await m.post({ action: 'round' });
     expect(round.status).toBe(409);
     expect((await m.agent.get(m.url)).body.progress).toMatchObject({ done: 2 * perCopy, version: 2 });
+    // Undo from the end goes back to the last stitch.
+    expect((await m.post({ action: 'undo' })).body.progress).toMatchObject({
+      copy: 2,
+      round: ball.length - 1,
+      step: ball.at(-1)! - 1,
+    });
     // A refused tap is not kept, so a retry is refused the same way rather than counted later.
-    expect(await t.db('progress_events').where({ piece_id: m.pieceId }).count({ n: '*' }).first()).toEqual({ n: 2 });
+    expect(await t.db('progress_events').where({ piece_id: m.pieceId }).count({ n: '*' }).first()).toEqual({
+      n: 3,
+    });
   });
 
   it('answers 409 for a piece with no rounds yet', async () => {
@@ -272,7 +300,9 @@ describe('isolation between members', () => {
     expect(post.status).toBe(404);
     expect((await other.get(`${owner.url}/history`)).status).toBe(404);
     expect((await other.get(`/api/pieces/${owner.pieceId}/placements`)).status).toBe(404);
-    expect((await other.post(`/api/pieces/${owner.pieceId}/placements`).send({ round: 1, label: 'nose' })).status).toBe(404);
+    expect(
+      (await other.post(`/api/pieces/${owner.pieceId}/placements`).send({ round: 1, label: 'nose' })).status,
+    ).toBe(404);
     expect((await owner.agent.get(owner.url)).body.progress).toMatchObject({ done: 1, version: 1 });
   });
 
@@ -295,15 +325,39 @@ describe('isolation between members', () => {
 
 describe('bad input', () => {
   it.each([
-    ['an unknown action', { opId: 'op-12345678', action: 'skip' }, /action is one of step, undo, round or set/],
+    [
+      'an unknown action',
+      { opId: 'op-12345678', action: 'skip' },
+      /action is one of step, undo, round or set/,
+    ],
     ['no opId', { action: 'step' }, /opId/],
     ['a short opId', { opId: 'x', action: 'step' }, /opId is at least 8/],
-    ['an opId with odd characters', { opId: '<script>alert(1)</script>', action: 'step' }, /opId uses letters/],
+    [
+      'an opId with odd characters',
+      { opId: '<script>alert(1)</script>', action: 'step' },
+      /opId uses letters/,
+    ],
     ['a set without a position', { opId: 'op-12345678', action: 'set' }, /needs to/],
-    ['a step with a position', { opId: 'op-12345678', action: 'step', to: { copy: 1, round: 0, step: 0 } }, /Only a "set"/],
-    ['a position with a negative round', { opId: 'op-12345678', action: 'set', to: { copy: 1, round: -1, step: 0 } }, /0-based/],
-    ['a fractional step', { opId: 'op-12345678', action: 'set', to: { copy: 1, round: 0, step: 1.5 } }, /step/],
-    ['a tap time that is not a date', { opId: 'op-12345678', action: 'step', at: 'yesterday' }, /ISO date-time/],
+    [
+      'a step with a position',
+      { opId: 'op-12345678', action: 'step', to: { copy: 1, round: 0, step: 0 } },
+      /Only a "set"/,
+    ],
+    [
+      'a position with a negative round',
+      { opId: 'op-12345678', action: 'set', to: { copy: 1, round: -1, step: 0 } },
+      /0-based/,
+    ],
+    [
+      'a fractional step',
+      { opId: 'op-12345678', action: 'set', to: { copy: 1, round: 0, step: 1.5 } },
+      /step/,
+    ],
+    [
+      'a tap time that is not a date',
+      { opId: 'op-12345678', action: 'step', at: 'yesterday' },
+      /ISO date-time/,
+    ],
     ['an extra field', { opId: 'op-12345678', action: 'step', count: 5 }, /count|Unrecognized/i],
   ])('answers 422 for %s', async (_name, body, message) => {
     const m = await maker();

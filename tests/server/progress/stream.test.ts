@@ -24,7 +24,9 @@ afterAll(async () => {
 
 async function signIn() {
   const user = await createTestUser(t.db);
-  const res = await request(t.app).post('/api/auth/signin').send({ email: user.email, password: user.password });
+  const res = await request(t.app)
+    .post('/api/auth/signin')
+    .send({ email: user.email, password: user.password });
   const cookie = (res.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
   return { user, cookie };
 }
@@ -32,7 +34,10 @@ async function signIn() {
 /** Reads server-sent events from a stream until `want` of them have arrived. */
 async function openStream(url: string, cookie: string) {
   const controller = new AbortController();
-  const res = await fetch(url, { headers: { cookie, accept: 'text/event-stream' }, signal: controller.signal });
+  const res = await fetch(url, {
+    headers: { cookie, accept: 'text/event-stream' },
+    signal: controller.signal,
+  });
   const events: Array<{ event: string; data: any }> = [];
   let buffer = '';
   const reader = res.body!.getReader();
@@ -72,16 +77,34 @@ describe('GET /api/pieces/:pieceId/stream', () => {
     expect(stream.res.status).toBe(200);
     expect(stream.res.headers.get('content-type')).toMatch(/text\/event-stream/);
     const [hello] = await stream.until(1);
-    expect(hello).toEqual({ event: 'progress', data: { type: 'progress', opId: null, progress: { copy: 1, round: 0, step: 0, done: 0, version: 0, updatedAt: null } } });
+    expect(hello).toEqual({
+      event: 'progress',
+      data: {
+        type: 'progress',
+        opId: null,
+        progress: { copy: 1, round: 0, step: 0, done: 0, version: 0, updatedAt: null },
+      },
+    });
 
     const opId = newOpId();
-    const tap = await fetch(`${base}/api/pieces/${pieceIds[0]}/progress`, { method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body: JSON.stringify({ opId, action: 'step' }) });
+    const tap = await fetch(`${base}/api/pieces/${pieceIds[0]}/progress`, {
+      method: 'POST',
+      headers: { cookie, 'content-type': 'application/json' },
+      body: JSON.stringify({ opId, action: 'step' }),
+    });
     expect(tap.status).toBe(200);
     const events = await stream.until(2);
     expect(events[1]).toMatchObject({ event: 'progress', data: { opId, progress: { done: 1, version: 1 } } });
 
-    await fetch(`${base}/api/pieces/${pieceIds[0]}/placements`, { method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body: JSON.stringify({ round: 1, label: 'nose' }) });
-    expect((await stream.until(3))[2]).toEqual({ event: 'placements', data: { type: 'placements', pieceId: pieceIds[0] } });
+    await fetch(`${base}/api/pieces/${pieceIds[0]}/placements`, {
+      method: 'POST',
+      headers: { cookie, 'content-type': 'application/json' },
+      body: JSON.stringify({ round: 1, label: 'nose' }),
+    });
+    expect((await stream.until(3))[2]).toEqual({
+      event: 'placements',
+      data: { type: 'placements', pieceId: pieceIds[0] },
+    });
     await stream.close();
   });
 
@@ -99,7 +122,11 @@ describe('GET /api/pieces/:pieceId/stream', () => {
 
     const stream = await openStream(`${base}/api/pieces/${mine[0]}/stream`, a.cookie);
     await stream.until(1);
-    await fetch(`${base}/api/pieces/${mine[1]}/progress`, { method: 'POST', headers: { cookie: a.cookie, 'content-type': 'application/json' }, body: JSON.stringify({ opId: newOpId(), action: 'step' }) });
+    await fetch(`${base}/api/pieces/${mine[1]}/progress`, {
+      method: 'POST',
+      headers: { cookie: a.cookie, 'content-type': 'application/json' },
+      body: JSON.stringify({ opId: newOpId(), action: 'step' }),
+    });
     await new Promise((r) => setTimeout(r, 200));
     expect(stream.events).toHaveLength(1);
     await stream.close();
@@ -115,7 +142,8 @@ describe('GET /api/pieces/:pieceId/stream', () => {
     expect(hubFor(t.db).listenerCount(channel)).toBe(1);
     await stream.close();
     const start = Date.now();
-    while (hubFor(t.db).listenerCount(channel) > 0 && Date.now() - start < 3000) await new Promise((r) => setTimeout(r, 20));
+    while (hubFor(t.db).listenerCount(channel) > 0 && Date.now() - start < 3000)
+      await new Promise((r) => setTimeout(r, 20));
     expect(hubFor(t.db).listenerCount(channel)).toBe(0);
   });
 });

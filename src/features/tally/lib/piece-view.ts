@@ -71,11 +71,13 @@ export function roundView(
   shape: PieceShape,
   position: Position,
 ): RoundView | null {
-  const round = check.rounds[position.round];
-  if (!round) return null;
-  const stepsInRound = shape.stepsPerRound[position.round] ?? Math.max(1, round.steps.length);
-  const stepsDone = Math.min(position.step, stepsInRound);
   const finished = isFinished(shape, position);
+  // Past the end of the piece the last round is shown, complete.
+  const index = Math.min(position.round, check.rounds.length - 1);
+  const round = check.rounds[index];
+  if (!round) return null;
+  const stepsInRound = shape.stepsPerRound[index] ?? Math.max(1, round.steps.length);
+  const stepsDone = finished ? stepsInRound : Math.min(position.step, stepsInRound);
   const next = !finished && stepsDone < round.steps.length ? round.steps[stepsDone] : null;
   let worked = 0;
   let made = 0;
@@ -91,7 +93,7 @@ export function roundView(
   const line = lines[round.line] ?? `${round.label}: ${round.text}`;
   const last = check.rounds[check.rounds.length - 1];
   return {
-    index: position.round,
+    index,
     round,
     word: roundWord(round),
     name: `${roundWord(round)} ${round.number}`,
