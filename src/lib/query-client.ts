@@ -12,7 +12,10 @@ const persistedRoots: ReadonlyArray<readonly unknown[]> = [['auth', 'me'], ['tal
 const underRoot = (key: readonly unknown[]) => persistedRoots.some((root) => root.every((part, i) => key[i] === part));
 
 // Typed by shape: the persister packages bring their own copy of query-core's types.
-export function shouldPersistQuery(query: { state: { status: string }; queryKey: readonly unknown[] }) {
+export function shouldPersistQuery(query: { state: { status: string; data?: unknown }; queryKey: readonly unknown[] }) {
+  // "Signed out" is never kept: a stale copy of it, restored right after signing in, would send the member back
+  // to the sign-in page.
+  if (query.queryKey[0] === 'auth' && query.state.data == null) return false;
   return query.state.status === 'success' && underRoot(query.queryKey);
 }
 
