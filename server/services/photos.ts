@@ -61,14 +61,23 @@ export function photoOut(row: PhotoRow): PhotoOut {
  * owner has no session, and their photos are served to no one. Everyone refused gets the same 404 as for a
  * photo that does not exist.
  */
-export async function canViewPhoto(db: Knex, user: { id: string } | null | undefined, photo: Pick<PhotoRow, 'project_id'>) {
+export async function canViewPhoto(
+  db: Knex,
+  user: { id: string } | null | undefined,
+  photo: Pick<PhotoRow, 'id' | 'project_id' | 'entry_id'>,
+) {
   const project = await db('projects as p')
     .join('users as u', 'u.id', 'p.owner_id')
     .where('p.id', photo.project_id)
-    .first('p.owner_id', 'u.disabled_at');
+    .first('p.owner_id', 'p.cover_photo_id', 'u.disabled_at');
   if (!project || project.disabled_at) return false;
   if (user && project.owner_id === user.id) return true;
-  return isShowcaseOpen(db, photo.project_id);
+  if (!(await isShowcaseOpen(db, photo.project_id))) return false;
+  // Others see exactly the photos the showcase shows (share.ts showcasePhotos): the cover, photos of the
+  // project itself, and photos of entries the owner put on the showcase — not those of private entries.
+  if (project.cover_photo_id === photo.id || !photo.entry_id) return true;
+  const entry = await db('journal_entries').where({ id: photo.entry_id }).first('on_showcase');
+  return Boolean(entry?.on_showcase);
 }
 
 /** Cache-Control for a photo: only one everybody may see can sit in shared caches. */

@@ -136,7 +136,7 @@ describe('the journal timeline', () => {
         const file = form.get('photos') as File;
         uploads.push(file.name);
         if (file.name.startsWith('notes')) {
-          return HttpResponse.json({ error: `“${file.name}” is not a photo Whorlbook can read: its contents are not an image, whatever its name says. Photos work as JPEG or PNG.` }, { status: 415 });
+          return HttpResponse.json({ error: `“${file.name}” is not a photo Whorlbook can read: its contents are not an image, whatever its name says. Photos work as JPEG, PNG or WebP.` }, { status: 415 });
         }
         list = [{ ...list[0], photos: [photo(40, 9, 'Whole project — 26 Nov 2026')] }];
         return HttpResponse.json({ photos: [photo(40, 9, 'Whole project — 26 Nov 2026')] }, { status: 201 });
@@ -180,7 +180,7 @@ describe('the journal timeline', () => {
     await user.click(await screen.findByRole('button', { name: 'Edit the entry of 20 Nov 2026' }));
     await user.upload(screen.getByLabelText('Photo files'), new File(['%PDF-1.7'], 'pattern.pdf', { type: 'application/pdf' }));
     await user.click(screen.getByRole('button', { name: 'Save changes' }));
-    expect(await screen.findByText('“pattern.pdf” is not a photo. Photos work as JPEG or PNG.')).toBeInTheDocument();
+    expect(await screen.findByText('“pattern.pdf” is not a photo. Photos work as JPEG, PNG or WebP.')).toBeInTheDocument();
     expect(sent).toBe(0);
   });
 

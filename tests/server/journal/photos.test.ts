@@ -309,7 +309,10 @@ describe('who can see a photo', () => {
   beforeAll(async () => {
     other = await signedInAgent(t.app, t.db);
     privateProject = await createProject(t.db, owner.user.id, { title: 'Secret gift' });
-    const entry = await owner.agent.post(`/api/projects/${privateProject.id}/entries`).send({ body: 'A surprise.', entryDate: '2026-12-01' });
+    // The entry is marked for the showcase, so its photo is one a visitor may see once the project is shared.
+    const entry = await owner.agent
+      .post(`/api/projects/${privateProject.id}/entries`)
+      .send({ body: 'A surprise.', entryDate: '2026-12-01', onShowcase: true });
     const res = await upload([{ data: await makeJpeg({ width: 120, height: 90 }), name: 'gift.jpg' }], owner.agent, entry.body.entry.id);
     expect(res.status).toBe(201);
     photo = res.body.photos[0];
@@ -355,6 +358,26 @@ describe('who can see a photo', () => {
     expect((await request(t.app).get(photo.url)).status).toBe(404);
   });
 
+  it('while shared, a photo of an entry not on the showcase stays private unless it is the cover', async () => {
+    const diary = await owner.agent
+      .post(`/api/projects/${privateProject.id}/entries`)
+      .send({ body: 'Frogged the ear twice.', entryDate: '2026-12-01' });
+    const res = await upload([{ data: await makeJpeg({ width: 60, height: 60 }), name: 'messy.jpg' }], owner.agent, diary.body.entry.id);
+    const hidden = res.body.photos[0];
+    await setVisibility(t.db, privateProject.id, 'link');
+    try {
+      expect((await request(t.app).get(hidden.url)).status).toBe(404);
+      expect((await other.agent.get(hidden.thumbUrl)).status).toBe(404);
+      expect((await owner.agent.get(hidden.url)).status).toBe(200);
+      expect((await request(t.app).get(photo.url)).status).toBe(200); // the showcase entry's photo
+      await t.db('projects').where({ id: privateProject.id }).update({ cover_photo_id: hidden.id });
+      expect((await request(t.app).get(hidden.url)).status).toBe(200);
+    } finally {
+      await t.db('projects').where({ id: privateProject.id }).update({ cover_photo_id: null });
+      await setVisibility(t.db, privateProject.id, 'private');
+    }
+  });
+
   it('a shared project whose showcase an admin took down serves its photos to the owner only, privately cached', async () => {
     await setVisibility(t.db, privateProject.id, 'link');
     expect((await request(t.app).get(photo.url)).status).toBe(200);
@@ -377,7 +400,7 @@ describe('who can see a photo', () => {
   it('a disabled owner’s photos are served to no one, though the project is public', async () => {
     const maker = await signedInAgent(t.app, t.db);
     const shared = await createProject(t.db, maker.user.id, { title: 'Shared then closed', visibility: 'public' });
-    const entry = await maker.agent.post(`/api/projects/${shared.id}/entries`).send({ body: 'Done.', entryDate: '2026-12-02' });
+    const entry = await maker.agent.post(`/api/projects/${shared.id}/entries`).send({ body: 'Done.', entryDate: '2026-12-02', onShowcase: true });
     const up = await upload([{ data: await makeJpeg({ width: 80, height: 60 }), name: 'done.jpg' }], maker.agent, entry.body.entry.id);
     expect(up.status).toBe(201);
     const p = up.body.photos[0];

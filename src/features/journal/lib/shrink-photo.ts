@@ -42,7 +42,7 @@ export function refuseLocally(file: File): string | null {
   const name = `“${file.name || 'unnamed file'}”`;
   if (file.size === 0) return `${name} is empty (0 bytes). Choose the photo again.`;
   if (file.type && !file.type.startsWith('image/') && !HEIC.test(file.name)) {
-    return `${name} is not a photo. Photos work as JPEG or PNG.`;
+    return `${name} is not a photo. Photos work as JPEG, PNG or WebP.`;
   }
   return null;
 }
