@@ -33,7 +33,7 @@ const pwa = VitePWA({
   workbox: {
     globPatterns: ['**/*.{js,css,html,svg,png,woff2,webmanifest}'],
     navigateFallback: 'index.html',
-    navigateFallbackDenylist: [/^\/api\//, /^\/media\//, /^\/uploads\//, /^\/p\//],
+    navigateFallbackDenylist: [/^\/api\//, /^\/media\//, /^\/uploads\//, /^\/p\//, /^\/m\//],
     cleanupOutdatedCaches: true,
     clientsClaim: true,
     skipWaiting: true,
@@ -52,6 +52,7 @@ export default defineConfig({
       '/uploads': apiTarget,
       '/media': apiTarget,
       '/p/': apiTarget,
+      '/m/': apiTarget,
     },
   },
   build: { outDir: 'dist', sourcemap: false },

@@ -17,7 +17,8 @@ export function createDb(filename: string): Knex {
       afterCreate(conn: { pragma: (s: string) => unknown }, done: (err: Error | null, conn: unknown) => void) {
         conn.pragma('foreign_keys = ON');
         conn.pragma('journal_mode = WAL');
-        conn.pragma('synchronous = NORMAL');
+        // FULL: a committed tap survives a power cut too, not only a crash (WAL with NORMAL may lose the last commits).
+        conn.pragma('synchronous = FULL');
         conn.pragma('busy_timeout = 5000');
         done(null, conn);
       },

@@ -134,6 +134,7 @@ interface Statements {
   insert: Database.Statement<[number, string, string, string, string, string, string | null, number], { id: number }>;
   markUndone: Database.Statement<[number, number]>;
   upsert: Database.Statement<[number, number, number, number, number, number, string]>;
+  touchProject: Database.Statement<[string, number]>;
 }
 const statements = new WeakMap<Database.Database, Statements>();
 function statementsFor(conn: Database.Database): Statements {
@@ -153,6 +154,8 @@ function statementsFor(conn: Database.Database): Statements {
         'insert into piece_progress (piece_id, copy, round, step, done, version, updated_at) values (?, ?, ?, ?, ?, ?, ?) ' +
           'on conflict (piece_id) do update set copy = excluded.copy, round = excluded.round, step = excluded.step, done = excluded.done, version = excluded.version, updated_at = excluded.updated_at',
       ),
+      // "On the hook" lists the project last worked on first.
+      touchProject: conn.prepare('update projects set updated_at = ? where id = ?'),
     };
     statements.set(conn, s);
   }
@@ -162,7 +165,7 @@ function statementsFor(conn: Database.Database): Statements {
 const NO_ROUNDS = 'This piece has no rounds to count yet. Add its instructions on the project page first.';
 
 /** The event and the new position, in one transaction. A repeated opId changes nothing. */
-function applyInTransaction(conn: Database.Database, shape: TallyShape, pieceId: number, op: ProgressOp) {
+function applyInTransaction(conn: Database.Database, shape: TallyShape, pieceId: number, projectId: number, op: ProgressOp) {
   const st = statementsFor(conn);
   return conn
     .transaction((): { progress: ProgressOut; applied: boolean } => {
@@ -199,6 +202,7 @@ function applyInTransaction(conn: Database.Database, shape: TallyShape, pieceId:
       if (undone) st.markUndone.run(id, undone.id);
       const updatedAt = new Date().toISOString();
       st.upsert.run(pieceId, after.copy, after.round, after.step, done, version, updatedAt);
+      st.touchProject.run(updatedAt, projectId);
       return { progress: { ...after, done, version, updatedAt }, applied: true };
     })
     .immediate();
@@ -215,7 +219,7 @@ export async function applyProgress(db: Knex, userId: string, pieceId: number, o
     const piece = statementsFor(conn).piece.get(pieceId, userId);
     if (!piece) throw notFound('That piece');
     const shape = shapeForInstructions(piece.instructions ?? '', piece.copies, piece.terms === 'uk' ? 'uk' : 'us');
-    result = applyInTransaction(conn, shape, pieceId, op);
+    result = applyInTransaction(conn, shape, pieceId, piece.project_id, op);
   } finally {
     await db.client.releaseConnection(conn);
   }

@@ -6,13 +6,13 @@ import { MaterialsSchema, type Materials } from '../../src/schemas/materials.js'
 import type { CreateProjectSchema, ProjectPieceInputSchema, UpdateProjectSchema } from '../../src/schemas/project.js';
 import { cautionsFor } from '../../src/reference/safety.js';
 import { hook } from '../../src/reference/hooks.js';
-import { checkPiece } from '../../src/engine/index.js';
 import type { Placement, PieceProgress, Project, ProjectPiece } from '../../src/types/api.js';
 import type { z } from 'zod';
 import { HttpError, notFound } from '../lib/http-error.js';
 import { deleteProjectPhotoFiles } from '../lib/storage.js';
 import { ownedProject } from './ownership.js';
 import { photoOut, type PhotoRow } from './photos.js';
+import { shapeForInstructions, tallyTotals } from './progress.js';
 
 type CreateInput = z.output<typeof CreateProjectSchema>;
 type UpdateInput = z.output<typeof UpdateProjectSchema>;
@@ -90,12 +90,8 @@ function toPlacement(r: Row): Placement {
  * past its last round, or on to the next copy.
  */
 export function pieceTotals(instructions: string, terms: 'us' | 'uk', copies: number, progress: PieceProgress) {
-  const check = checkPiece(instructions, { terms });
-  const rounds = check.rounds.length;
-  const pastEnd = rounds > 0 && progress.round >= rounds;
-  const copiesDone = Math.max(0, Math.min(copies, progress.copy - 1 + (pastEnd ? 1 : 0)));
-  const roundsDone = copiesDone >= copies ? rounds : Math.max(0, Math.min(rounds, progress.round));
-  return { rounds, stepsPerCopy: check.totalSteps, copiesDone, roundsDone };
+  // The Tally's own reading of the piece (cached), so the project page and the counter never disagree on counts.
+  return tallyTotals(shapeForInstructions(instructions, copies, terms), progress);
 }
 
 function shareUrl(env: AppContext['env'], row: Row): string | null {
