@@ -41,7 +41,8 @@ function weightFor(project: Project, yarnNames: string[]) {
 export default function ProjectRoute() {
   const { projectId } = useParams();
   const id = Number(projectId);
-  const project = useProject(id);
+  const [deleted, setDeleted] = useState(false);
+  const project = useProject(id, { enabled: !deleted });
   const shelf = useYarns();
   const update = useUpdateProject(id);
   const remove = useDeleteProject(id);
@@ -210,6 +211,7 @@ export default function ProjectRoute() {
         onConfirm={() =>
           remove.mutate(undefined, {
             onSuccess: () => {
+              setDeleted(true);
               setConfirming(false);
               toast.success(`Deleted “${p.title}”.`);
               // Drop the stored copy only once this page has gone, or it would ask the server for it again.

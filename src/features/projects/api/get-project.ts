@@ -16,4 +16,5 @@ export const projectQueryOptions = (id: number) =>
     meta: { silent: true },
   });
 
-export const useProject = (id: number) => useQuery(projectQueryOptions(id));
+/** `enabled: false` once the project is deleted, so nothing (a reconnect, a focus) asks the server for it again. */
+export const useProject = (id: number, { enabled = true }: { enabled?: boolean } = {}) => useQuery({ ...projectQueryOptions(id), enabled });

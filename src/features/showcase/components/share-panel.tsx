@@ -29,6 +29,8 @@ const choices: Array<{ value: Visibility; title: string; detail: string; icon: t
 export function SharePanel({ projectId, title, onChanged }: { projectId: number; title?: string; onChanged?: () => void }) {
   const status = useShareStatus(projectId);
   const setVisibility = useSetVisibility(projectId, onChanged);
+  // Set in the click itself so the radio shows the choice at once (the mutation's own state arrives a tick later).
+  const [choosing, setChoosing] = useState<Visibility | null>(null);
   const newLink = useNewShareLink(projectId, onChanged);
   const settings = useShareSettings();
   const updateSettings = useUpdateShareSettings();
@@ -72,7 +74,7 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
               <div className="grid gap-2">
                 {choices.map((c) => {
                   // The choice shows at once while the change is on its way; a refusal puts the old one back.
-                  const on = (setVisibility.isPending ? setVisibility.variables : share.visibility) === c.value;
+                  const on = (choosing ?? share.visibility) === c.value;
                   const Icon = c.icon;
                   return (
                     <label
@@ -87,7 +89,10 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
                         name={`${name}-visibility`}
                         value={c.value}
                         checked={on}
-                        onChange={() => setVisibility.mutate(c.value)}
+                        onChange={() => {
+                          setChoosing(c.value);
+                          setVisibility.mutate(c.value, { onSettled: () => setChoosing(null) });
+                        }}
                         className="mt-1 h-5 w-5 shrink-0 accent-moss"
                       />
                       <Icon aria-hidden className="mt-0.5 h-5 w-5 shrink-0 text-moss dark:text-[#9cc3a8]" />
