@@ -36,7 +36,7 @@ export default defineConfig({
           environment: 'happy-dom',
           include: ['tests/client/**/*.test.{ts,tsx}'],
           setupFiles: ['tests/setup/client.ts'],
-          testTimeout: 15_000,
+          testTimeout: 30_000,
         },
       },
     ],

@@ -4,24 +4,15 @@ import type { AppContext } from '../context.js';
 import { HttpError, notFound } from '../lib/http-error.js';
 import { renderMail } from '../lib/mail-template.js';
 import { absoluteUrl, isShowcaseOpen, sharePath, sharedProjectByToken } from './share.js';
+import type { ShowcaseComment as CommentOut } from '../../src/types/showcase.js';
+
+export type { CommentOut };
 
 // Comments on a showcase. A body is kept exactly as typed and goes out only as a JSON string; the client renders
 // it as a text node, so markup in a comment stays inert everywhere it appears.
 
 type Row = Record<string, any>;
 
-export interface CommentOut {
-  id: number;
-  body: string;
-  author: { displayName: string };
-  createdAt: string;
-  hidden: boolean;
-  /** Hidden by an admin after a report: the owner cannot show it again. */
-  hiddenByAdmin: boolean;
-  mine: boolean;
-  canDelete: boolean;
-  canHide: boolean;
-}
 
 const COMMENT = 'That comment';
 export const COMMENT_MAIL_INTERVAL_MS = 60 * 60 * 1000;

@@ -6,7 +6,9 @@ import { MaterialsSchema, type Materials } from '../../src/schemas/materials.js'
 import type { CreateProjectSchema, ProjectPieceInputSchema, UpdateProjectSchema } from '../../src/schemas/project.js';
 import { cautionsFor } from '../../src/reference/safety.js';
 import { hook } from '../../src/reference/hooks.js';
-import type { Placement, PieceProgress, Project, ProjectPiece } from '../../src/types/api.js';
+import type { Placement, PieceProgress, Project, ProjectListItem, ProjectPiece } from '../../src/types/api.js';
+
+export type { ProjectListItem };
 import type { z } from 'zod';
 import { HttpError, notFound } from '../lib/http-error.js';
 import { deleteProjectPhotoFiles } from '../lib/storage.js';
@@ -19,21 +21,6 @@ type UpdateInput = z.output<typeof UpdateProjectSchema>;
 type PieceInput = z.output<typeof ProjectPieceInputSchema>;
 type Row = Record<string, any>;
 
-export interface ProjectListItem {
-  id: number;
-  title: string;
-  status: ProjectStatus;
-  startedOn: string | null;
-  finishedOn: string | null;
-  updatedAt: string;
-  pieceCount: number;
-  recipient: string | null;
-  patternTitle: string | null;
-  forYoungChild: boolean;
-  visibility: 'private' | 'link' | 'public';
-  /** How many cautions the project page will show (small parts, young child). */
-  cautionCount: number;
-}
 
 const nowIso = () => new Date().toISOString();
 const today = () => new Date().toISOString().slice(0, 10);

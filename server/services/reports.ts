@@ -3,25 +3,14 @@ import type { User } from 'lucia';
 import { HttpError, notFound } from '../lib/http-error.js';
 import type { CreateReportInput } from '../../src/schemas/share.js';
 import { isShowcaseOpen, sharePath, sharedProjectByToken } from './share.js';
+import type { Report as ReportOut } from '../../src/types/showcase.js';
+
+export type { ReportOut };
 
 // Reports of a comment or a whole showcase page. Members report what they can see; admins hide or dismiss.
 
 type Row = Record<string, any>;
 
-export interface ReportOut {
-  id: number;
-  target: 'comment' | 'project';
-  reason: string;
-  status: 'open' | 'hidden' | 'dismissed';
-  createdAt: string;
-  handledAt: string | null;
-  reporter: { displayName: string };
-  handledBy: { displayName: string } | null;
-  page: { title: string; path: string | null; ownerDisplayName: string; hidden: boolean } | null;
-  comment: { id: number; body: string; authorDisplayName: string; hidden: boolean } | null;
-  /** Open reports on the same comment or page, this one included. */
-  openReportsOnTarget: number;
-}
 
 export async function createReport(db: Knex, user: User, input: CreateReportInput) {
   let target: { target: 'comment' | 'project'; comment_id: number | null; project_id: number };

@@ -4,12 +4,15 @@ import type { User } from 'lucia';
 import type { AppContext } from '../context.js';
 import { HttpError, notFound } from '../lib/http-error.js';
 import { ownedProject } from './ownership.js';
-import { MaterialsSchema, notionLabels, type Materials, type NotionKind } from '../../src/schemas/materials.js';
+import { MaterialsSchema, notionLabels, type Materials } from '../../src/schemas/materials.js';
 import { projectStatusLabels, type ProjectStatus } from '../../src/schemas/common.js';
 import { ShareTokenSchema } from '../../src/schemas/share.js';
 import { hook } from '../../src/reference/hooks.js';
 import { categoryForPly, yarnWeightLabel } from '../../src/reference/yarn-weights.js';
-import { cautionsFor, type Caution } from '../../src/reference/safety.js';
+import { cautionsFor } from '../../src/reference/safety.js';
+import type { MakerProfile, ShareStatus, Showcase as ShowcaseView, ShowcasePhoto, ShowcaseYarn } from '../../src/types/showcase.js';
+
+export type { MakerProfile, ShareStatus, ShowcasePhoto, ShowcaseView, ShowcaseYarn };
 
 // The showcase: the public, read-only view of a shared project. Everything here is built from an explicit list of
 // fields, never by passing rows through, so nothing private (e-mail, recipient, notes, unmarked journal entries)
@@ -85,52 +88,8 @@ export async function isShowcaseOpen(db: Knex, projectId: number): Promise<boole
 
 // ---- The public view ---------------------------------------------------------------------------------------
 
-export interface ShowcasePhoto {
-  id: number;
-  url: string;
-  thumbUrl: string;
-  width: number;
-  height: number;
-  alt: string;
-  cover: boolean;
-}
 
-export interface ShowcaseYarn {
-  name: string;
-  colour: string | null;
-  fibre: string | null;
-  weight: { category: number; label: string; approximate: boolean } | null;
-  amount: string | null;
-}
 
-export interface ShowcaseView {
-  token: string;
-  url: string;
-  visibility: 'link' | 'public';
-  title: string;
-  status: ProjectStatus;
-  statusLabel: string;
-  startedOn: string | null;
-  finishedOn: string | null;
-  workingMinutes: number;
-  maker: { displayName: string; profileUrl: string | null };
-  pattern: { title: string; designerCredit: string | null; sourceUrl: string | null } | null;
-  materials: {
-    yarns: ShowcaseYarn[];
-    hooks: Array<{ mm: number; us: string | null; note: string | null }>;
-    notions: Array<{ kind: NotionKind; label: string; sizeMm: number | null; quantity: number | null; note: string | null }>;
-  };
-  pieces: Array<{ name: string; copies: number }>;
-  placements: Array<{ label: string; piece: string; copy: number; copies: number; round: number; step: number | null; note: string | null; text: string }>;
-  changes: Array<{ id: number; date: string; body: string }>;
-  journal: Array<{ id: number; date: string; body: string; minutes: number | null; tags: string[] }>;
-  photos: ShowcasePhoto[];
-  cautions: Caution[];
-  cheers: { count: number; cheered: boolean };
-  commentCount: number;
-  /** ownerProjectId lets the owner jump back to their project; it is null for everyone else. */
-  viewer: { signedIn: boolean; isOwner: boolean; ownerProjectId: number | null };
-}
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 const trimNumber = (n: number) => String(Number(n.toFixed(2)));
@@ -281,19 +240,6 @@ export async function rotateShareToken(db: Knex, userId: string, projectId: numb
   await db('projects').where({ id: row.id }).update({ share_token: newShareToken(), updated_at: nowIso() });
 }
 
-export interface ShareStatus {
-  visibility: 'private' | 'link' | 'public';
-  sharePath: string | null;
-  shareUrl: string | null;
-  /** The owner's public maker page, while this project is listed on it. */
-  profilePath: string | null;
-  hiddenByAdmin: boolean;
-  cheerCount: number;
-  commentCount: number;
-  hiddenCommentCount: number;
-  shownEntryCount: number;
-  photoCount: number;
-}
 
 /** What the owner's share panel shows: the link, and what friends have done with it. */
 export async function shareStatus(db: Knex, userId: string, projectId: number, origin: string): Promise<ShareStatus> {
@@ -326,10 +272,6 @@ export async function updateShareSettings(db: Knex, userId: string, input: { not
 
 // ---- The maker's public profile ----------------------------------------------------------------------------
 
-export interface MakerProfile {
-  maker: { id: string; displayName: string };
-  projects: Array<{ title: string; url: string; statusLabel: string; finishedOn: string | null; cover: { url: string; thumbUrl: string; alt: string } | null; cheerCount: number }>;
-}
 
 /** Only projects the maker made public are listed; link-only pages stay unlisted. No public page, no profile. */
 export async function makerProfile(db: Knex, makerId: string): Promise<MakerProfile> {

@@ -144,6 +144,22 @@ export interface JournalEntry {
   updatedAt: string;
 }
 
+export interface ProjectListItem {
+  id: number;
+  title: string;
+  status: ProjectStatus;
+  startedOn: string | null;
+  finishedOn: string | null;
+  updatedAt: string;
+  pieceCount: number;
+  recipient: string | null;
+  patternTitle: string | null;
+  forYoungChild: boolean;
+  visibility: 'private' | 'link' | 'public';
+  /** How many cautions the project page will show (small parts, young child). */
+  cautionCount: number;
+}
+
 export interface Project {
   id: number;
   title: string;

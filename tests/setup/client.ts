@@ -1,7 +1,10 @@
 import '@testing-library/jest-dom/vitest';
 import { afterAll, afterEach, beforeAll, vi } from 'vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { server } from '../client/mocks/server';
+
+// findBy*/waitFor give a busy shared 2-core machine time to render before calling it a failure.
+configure({ asyncUtilTimeout: 5000 });
 
 // Only the network is mocked (MSW); an unhandled request fails the test, and so does an unexpected console.error.
 beforeAll(() => server.listen({ onUnhandledRequest: 'error' }));

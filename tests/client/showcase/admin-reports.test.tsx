@@ -4,7 +4,7 @@ import userEvent from '@testing-library/user-event';
 import { http, HttpResponse } from 'msw';
 import { server, me } from '../mocks/server';
 import { renderRoute } from '../render';
-import type { MakerProfile, Report } from '@/features/showcase/types';
+import type { MakerProfile, Report } from '@/types/showcase';
 import { XSS } from './fixtures';
 
 function report(overrides: Partial<Report> = {}): Report {

@@ -1,4 +1,4 @@
-import type { Showcase, ShowcaseComment } from '@/features/showcase/types';
+import type { Showcase, ShowcaseComment } from '@/types/showcase';
 
 // A showcase of our own, shaped exactly like GET /api/share/:token answers.
 export const TOKEN = 'tok_abcdefghijklmnopqrstuv';

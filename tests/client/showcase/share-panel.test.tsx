@@ -9,7 +9,7 @@ import { server } from '../mocks/server';
 import { createQueryClient } from '@/lib/query-client';
 import { SharePanel } from '@/features/showcase/components/share-panel';
 import { QR_OPTIONS } from '@/features/showcase/components/qr-code';
-import type { ShareStatus } from '@/features/showcase/types';
+import type { ShareStatus } from '@/types/showcase';
 
 const PROJECT = 7;
 

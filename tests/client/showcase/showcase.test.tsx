@@ -5,7 +5,7 @@ import { http, HttpResponse } from 'msw';
 import { server } from '../mocks/server';
 import { renderRoute } from '../render';
 import { buildComment, buildShowcase, TOKEN, XSS } from './fixtures';
-import type { Showcase, ShowcaseComment } from '@/features/showcase/types';
+import type { Showcase, ShowcaseComment } from '@/types/showcase';
 
 const signedOut = http.get('*/api/auth/me', () => HttpResponse.json({ error: 'Please sign in to continue.' }, { status: 401 }));
 

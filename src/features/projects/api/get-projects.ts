@@ -1,23 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiGet } from '@/lib/api-client';
 import type { ProjectStatus } from '@/schemas/common';
+import type { ProjectListItem } from '@/types/api';
 import { projectKeys } from './keys';
 
-export interface ProjectListItem {
-  id: number;
-  title: string;
-  status: ProjectStatus;
-  startedOn: string | null;
-  finishedOn: string | null;
-  updatedAt: string;
-  pieceCount: number;
-  recipient: string | null;
-  patternTitle: string | null;
-  forYoungChild: boolean;
-  visibility: 'private' | 'link' | 'public';
-  /** How many safety cautions the project page shows. */
-  cautionCount: number;
-}
+export type { ProjectListItem };
+
 
 export const projectsQueryOptions = (filters: { status?: ProjectStatus } = {}) =>
   queryOptions({

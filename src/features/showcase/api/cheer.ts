@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { CheerSummary, Showcase } from '../types';
+import type { CheerSummary, Showcase } from '@/types/showcase';
 import { showcaseKeys } from './keys';
 
 /** POST adds the member's one cheer, DELETE takes it back; both answer with the new count. */

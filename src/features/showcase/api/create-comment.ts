@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPost } from '@/lib/api-client';
 import type { CreateCommentInput } from '@/schemas/share';
-import type { ShowcaseComment } from '../types';
+import type { ShowcaseComment } from '@/types/showcase';
 import { showcaseKeys } from './keys';
 
 export { CreateCommentSchema } from '@/schemas/share';

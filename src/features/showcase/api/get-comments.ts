@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiGet } from '@/lib/api-client';
-import type { ShowcaseComment } from '../types';
+import type { ShowcaseComment } from '@/types/showcase';
 import { showcaseKeys } from './keys';
 
 export const getComments = (token: string, signal?: AbortSignal) =>

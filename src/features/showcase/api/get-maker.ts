@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiGet } from '@/lib/api-client';
-import type { MakerProfile } from '../types';
+import type { MakerProfile } from '@/types/showcase';
 import { showcaseKeys } from './keys';
 
 export const getMaker = (id: string, signal?: AbortSignal) => apiGet<MakerProfile>(`/makers/${encodeURIComponent(id)}`, undefined, signal);

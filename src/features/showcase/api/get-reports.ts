@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiGet } from '@/lib/api-client';
-import type { Report } from '../types';
+import type { Report } from '@/types/showcase';
 import { reportKeys } from './keys';
 
 export type ReportFilter = 'open' | 'handled' | 'all';

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiGet } from '@/lib/api-client';
-import type { ShareStatus } from '../types';
+import type { ShareStatus } from '@/types/showcase';
 import { shareKeys } from './keys';
 
 export const getShareStatus = (projectId: number, signal?: AbortSignal) => apiGet<{ share: ShareStatus }>(`/projects/${projectId}/share`, undefined, signal).then((r) => r.share);

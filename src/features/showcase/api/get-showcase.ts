@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiGet } from '@/lib/api-client';
-import type { Showcase } from '../types';
+import type { Showcase } from '@/types/showcase';
 import { showcaseKeys } from './keys';
 
 export const getShowcase = (token: string, signal?: AbortSignal) => apiGet<{ showcase: Showcase }>(`/share/${encodeURIComponent(token)}`, undefined, signal).then((r) => r.showcase);

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPatch } from '@/lib/api-client';
-import type { ShowcaseComment } from '../types';
+import type { ShowcaseComment } from '@/types/showcase';
 import { showcaseKeys } from './keys';
 
 export const setCommentHidden = (id: number, hidden: boolean) => apiPatch<{ comment: ShowcaseComment }>(`/comments/${id}`, { hidden }).then((r) => r.comment);

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPost } from '@/lib/api-client';
-import type { ShareStatus } from '../types';
+import type { ShareStatus } from '@/types/showcase';
 import { shareKeys, showcaseKeys } from './keys';
 
 /** Makes a new link; the old one stops working at once. */

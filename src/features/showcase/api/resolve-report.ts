@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPost } from '@/lib/api-client';
-import type { Report } from '../types';
+import type { Report } from '@/types/showcase';
 import { reportKeys } from './keys';
 
 export const resolveReport = (id: number, action: 'hide' | 'dismiss') => apiPost<{ report: Report }>(`/admin/reports/${id}/resolve`, { action }).then((r) => r.report);

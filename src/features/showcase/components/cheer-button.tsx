@@ -3,7 +3,7 @@ import { useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { paths } from '@/config/paths';
 import { useSetCheer } from '../api/cheer';
-import type { CheerSummary } from '../types';
+import type { CheerSummary } from '@/types/showcase';
 
 /** One cheer per member. The state is in the words ("Cheer" / "You cheered") and aria-pressed, not only the colour. */
 export function CheerButton({ token, cheers, signedIn }: { token: string; cheers: CheerSummary; signedIn: boolean }) {

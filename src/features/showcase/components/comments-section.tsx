@@ -14,7 +14,7 @@ import { useComments } from '../api/get-comments';
 import { CreateCommentSchema, useCreateComment } from '../api/create-comment';
 import { useDeleteComment } from '../api/delete-comment';
 import { useSetCommentHidden } from '../api/hide-comment';
-import type { ShowcaseComment } from '../types';
+import type { ShowcaseComment } from '@/types/showcase';
 import { formatWhen } from '../format';
 import { ReportDialog } from './report-dialog';
 import { Section } from './showcase-sections';

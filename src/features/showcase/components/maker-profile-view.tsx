@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { Link } from 'react-router-dom';
 import { PartyPopper, Image as ImageIcon } from 'lucide-react';
-import type { MakerProfile } from '../types';
+import type { MakerProfile } from '@/types/showcase';
 import { formatDay, plural } from '../format';
 
 /** A maker's public page: only the projects they chose to make public; link-only pages never appear here. */

@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useRef, useState, type PointerEvent } from 'react';
 import { ChevronLeft, ChevronRight, Expand, X } from 'lucide-react';
-import type { ShowcasePhoto } from '../types';
+import type { ShowcasePhoto } from '@/types/showcase';
 
 // A horizontal drag longer than this (CSS px) counts as a swipe; shorter ones are taps (common practice for
 // touch galleries: large enough not to fire while tapping, small enough for a thumb flick).

@@ -1,6 +1,6 @@
 import { useCallback, useEffect } from 'react';
 import { WhorlMark } from '@/components/layouts/whorl-mark';
-import type { Showcase } from '../types';
+import type { Showcase } from '@/types/showcase';
 
 // Printing: the page prints as a one- or two-page sheet (photo, facts, materials, notes; no buttons or comments),
 // or, with "Print table card", as a single card with the QR code for a craft-fair table. The dark theme is

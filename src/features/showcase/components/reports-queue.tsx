@@ -8,7 +8,7 @@ import { EmptyState, Loading } from '@/components/ui/page';
 import { cn } from '@/utils/cn';
 import { useReports, type ReportFilter } from '../api/get-reports';
 import { useResolveReport } from '../api/resolve-report';
-import type { Report } from '../types';
+import type { Report } from '@/types/showcase';
 import { formatWhen, plural } from '../format';
 
 const statusWords: Record<Report['status'], string> = { open: 'Open', hidden: 'Hidden', dismissed: 'Dismissed' };

@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import Markdown from 'react-markdown';
 import { ExternalLink } from 'lucide-react';
 import { Card } from '@/components/ui/card';
-import type { Showcase } from '../types';
+import type { Showcase } from '@/types/showcase';
 import { formatDay, formatMinutes } from '../format';
 
 export function Section({ title, children, id, className }: { title: string; children: ReactNode; id?: string; className?: string }) {

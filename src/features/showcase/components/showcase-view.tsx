@@ -4,7 +4,7 @@ import { Flag, Printer, QrCode as QrIcon, ArrowLeft, MessageCircle } from 'lucid
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { paths } from '@/config/paths';
-import type { Showcase } from '../types';
+import type { Showcase } from '@/types/showcase';
 import { plural } from '../format';
 import { PhotoGallery } from './photo-gallery';
 import { Changes, Facts, Journal, Materials, PatternCredit, Pieces } from './showcase-sections';

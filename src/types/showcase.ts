@@ -1,12 +1,10 @@
-// Shapes of the showcase API's answers (server/services/share.ts, comments.ts, reports.ts serialize exactly these).
+// Shapes of the showcase API's answers: server/services/share.ts, comments.ts and reports.ts serialize exactly these,
+// and the client reads them. One definition for both sides.
 import type { NotionKind } from '@/schemas/materials';
 import type { ProjectStatus } from '@/schemas/common';
+import type { Caution } from './api';
 
-export interface ShowcaseCaution {
-  code: string;
-  title: string;
-  message: string;
-}
+export type ShowcaseCaution = Caution;
 
 export interface ShowcasePhoto {
   id: number;
@@ -52,6 +50,7 @@ export interface Showcase {
   cautions: ShowcaseCaution[];
   cheers: CheerSummary;
   commentCount: number;
+  /** ownerProjectId lets the owner jump back to their project; it is null for everyone else. */
   viewer: { signedIn: boolean; isOwner: boolean; ownerProjectId: number | null };
 }
 
@@ -66,6 +65,7 @@ export interface ShowcaseComment {
   author: { displayName: string };
   createdAt: string;
   hidden: boolean;
+  /** Hidden by an admin after a report: the owner cannot show it again. */
   hiddenByAdmin: boolean;
   mine: boolean;
   canDelete: boolean;
@@ -76,6 +76,7 @@ export interface ShareStatus {
   visibility: 'private' | 'link' | 'public';
   sharePath: string | null;
   shareUrl: string | null;
+  /** The owner's public maker page, while this project is listed on it. */
   profilePath: string | null;
   hiddenByAdmin: boolean;
   cheerCount: number;
@@ -101,5 +102,6 @@ export interface Report {
   handledBy: { displayName: string } | null;
   page: { title: string; path: string | null; ownerDisplayName: string; hidden: boolean } | null;
   comment: { id: number; body: string; authorDisplayName: string; hidden: boolean } | null;
+  /** Open reports on the same comment or page, this one included. */
   openReportsOnTarget: number;
 }
