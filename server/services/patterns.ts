@@ -3,10 +3,10 @@ import { checkPiece } from '../../src/engine/index.js';
 import type { Terms } from '../../src/engine/types.js';
 import { hook } from '../../src/reference/hooks.js';
 import { cautionsFor } from '../../src/reference/safety.js';
-import { MaterialsSchema, type Materials } from '../../src/schemas/materials.js';
 import type { CreatePatternInput, PatternPieceInput, UpdatePatternInput } from '../../src/schemas/pattern.js';
 import type { Gauge, Pattern, PatternListItem, PatternPiece } from '../../src/types/api.js';
 import { HttpError, notFound } from '../lib/http-error.js';
+import { parseJson, readMaterials } from '../lib/json-columns.js';
 
 // Patterns and their pieces. The stitch engine checks every piece on every save and read, so a pattern
 // always comes back with the counts of the text as it is stored now (the engine may improve between reads).
@@ -39,19 +39,7 @@ interface PieceRow {
 
 const blankToNull = (s: string | null | undefined) => (s == null || s.trim() === '' ? null : s.trim());
 
-function parseJson<T>(text: string | null, fallback: T): T {
-  if (!text) return fallback;
-  try {
-    return JSON.parse(text) as T;
-  } catch {
-    return fallback;
-  }
-}
 
-function readMaterials(text: string): Materials {
-  const parsed = MaterialsSchema.safeParse(parseJson(text, {}));
-  return parsed.success ? parsed.data : { yarns: [], hooks: [], notions: [] };
-}
 
 export function checkText(instructions: string, terms: Terms): PatternPiece['check'] {
   const result = checkPiece(instructions, { terms });

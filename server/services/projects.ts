@@ -15,6 +15,7 @@ import { deleteProjectPhotoFiles } from '../lib/storage.js';
 import { ownedProject } from './ownership.js';
 import { photoOut, type PhotoRow } from './photos.js';
 import { shapeForInstructions, tallyTotals } from './progress.js';
+import { parseJson, readMaterials } from '../lib/json-columns.js';
 
 type CreateInput = z.output<typeof CreateProjectSchema>;
 type UpdateInput = z.output<typeof UpdateProjectSchema>;
@@ -25,20 +26,7 @@ type Row = Record<string, any>;
 const nowIso = () => new Date().toISOString();
 const today = () => new Date().toISOString().slice(0, 10);
 
-function parseJson<T>(text: string | null | undefined, fallback: T): T {
-  if (!text) return fallback;
-  try {
-    return JSON.parse(text) as T;
-  } catch {
-    return fallback;
-  }
-}
 
-/** Stored materials, normalised to the shared shape (older or partial JSON still reads). */
-function readMaterials(text: string | null | undefined): Materials {
-  const parsed = MaterialsSchema.safeParse(parseJson(text, {}));
-  return parsed.success ? parsed.data : { yarns: [], hooks: [], notions: [] };
-}
 
 export async function listProjects(db: Knex, ownerId: string, status?: ProjectStatus): Promise<ProjectListItem[]> {
   const rows = await db('projects as p')

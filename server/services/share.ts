@@ -4,13 +4,14 @@ import type { User } from 'lucia';
 import type { AppContext } from '../context.js';
 import { HttpError, notFound } from '../lib/http-error.js';
 import { ownedProject } from './ownership.js';
-import { MaterialsSchema, notionLabels, type Materials } from '../../src/schemas/materials.js';
+import { notionLabels, type Materials } from '../../src/schemas/materials.js';
 import { projectStatusLabels, type ProjectStatus } from '../../src/schemas/common.js';
 import { ShareTokenSchema } from '../../src/schemas/share.js';
 import { hook } from '../../src/reference/hooks.js';
 import { categoryForPly, yarnWeightLabel } from '../../src/reference/yarn-weights.js';
 import { cautionsFor } from '../../src/reference/safety.js';
 import type { MakerProfile, ShareStatus, Showcase as ShowcaseView, ShowcasePhoto, ShowcaseYarn } from '../../src/types/showcase.js';
+import { parseJson, readMaterials } from '../lib/json-columns.js';
 
 export type { MakerProfile, ShareStatus, ShowcasePhoto, ShowcaseView, ShowcaseYarn };
 
@@ -29,19 +30,7 @@ export const photoUrls = (key: string) => ({ url: `/media/photos/${key}/display.
 
 const nowIso = () => new Date().toISOString();
 
-function parseJson<T>(text: string | null | undefined, fallback: T): T {
-  if (!text) return fallback;
-  try {
-    return JSON.parse(text) as T;
-  } catch {
-    return fallback;
-  }
-}
 
-function readMaterials(text: string | null | undefined): Materials {
-  const parsed = MaterialsSchema.safeParse(parseJson(text, {}));
-  return parsed.success ? parsed.data : { yarns: [], hooks: [], notions: [] };
-}
 
 /** Only http(s) links become links: a stored "javascript:" source must never reach an href. */
 export function safeHttpUrl(value: unknown): string | null {
