@@ -3,19 +3,11 @@ import type { PlacementInput } from '../../src/schemas/progress.js';
 import { HttpError, notFound } from '../lib/http-error.js';
 import { ownedPiece } from './ownership.js';
 import { hubFor, type StreamMessage } from './progress.js';
+import type { Placement } from '../../src/types/api.js';
 
 // Where a part went ("left eye" at Rnd 9, stitch 15), marked from the Tally, so the second ear goes where the first did.
 
-export interface PlacementOut {
-  id: number;
-  pieceId: number;
-  copy: number;
-  round: number;
-  step: number | null;
-  label: string;
-  note: string | null;
-  createdAt: string;
-}
+export type PlacementOut = Placement;
 
 interface PlacementRow {
   id: number;
