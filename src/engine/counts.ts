@@ -74,7 +74,7 @@ export function notesAfter(check: PieceCheck, round: number | Round): Note[] {
   return check.notes.filter((n) => n.afterRound === r.number && n.line >= r.line && (!next || n.line <= next.line));
 }
 
-/** Placement notes with the rounds they name, for recording where parts went. */
+/** Placement notes with the rounds they name, for noting where parts went. */
 export function placements(check: PieceCheck): Note[] {
   return check.notes.filter((n) => n.kind === 'placement');
 }
