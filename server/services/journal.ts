@@ -2,31 +2,15 @@ import type { Knex } from 'knex';
 import type { AppContext } from '../context.js';
 import { HttpError, notFound } from '../lib/http-error.js';
 import { ownedProject } from './ownership.js';
-import { photoOut, removePhotoFiles, removePhotoRows, type PhotoOut, type PhotoRow } from './photos.js';
+import { photoOut, removePhotoFiles, removePhotoRows, type PhotoRow } from './photos.js';
+import type { JournalEntry as JournalEntryOut, JournalPhoto as JournalPhotoOut } from '../../src/types/api.js';
 import type { JournalTag } from '../../src/schemas/journal.js';
 
 // Journal entries: what a maker did on a day, on a project or one of its pieces. Entries tagged "change"
 // are the maker's modifications to the pattern, which the showcase lists.
 
-export interface JournalPhotoOut extends PhotoOut {
-  entryId: number;
-  cover: boolean;
-}
 
-export interface JournalEntryOut {
-  id: number;
-  projectId: number;
-  pieceId: number | null;
-  pieceName: string | null;
-  body: string;
-  entryDate: string;
-  minutes: number | null;
-  tags: JournalTag[];
-  onShowcase: boolean;
-  photos: JournalPhotoOut[];
-  createdAt: string;
-  updatedAt: string;
-}
+export type { JournalEntryOut, JournalPhotoOut };
 
 interface EntryRow {
   id: number;

@@ -8,6 +8,7 @@ import { imagePool } from '../workers/image-pool.js';
 import { isShowcaseOpen } from './share.js';
 import { PHOTO_LIMITS } from '../../src/schemas/journal.js';
 import type { ImageFormat, ImageJob } from '../workers/image.js';
+import type { PhotoOut } from '../../src/types/api.js';
 
 // Photos: every upload is sniffed from its bytes, measured from its header before anything decodes it,
 // then resized off the request thread into two JPEGs without EXIF. The original is never kept.
@@ -25,14 +26,7 @@ export interface PhotoRow {
   created_at: string;
 }
 
-export interface PhotoOut {
-  id: number;
-  url: string;
-  thumbUrl: string;
-  width: number;
-  height: number;
-  alt: string;
-}
+export type { PhotoOut };
 
 export interface UploadedFile {
   originalname: string;

@@ -3,6 +3,7 @@
 import type { Materials, Yarn } from '@/schemas/materials';
 import type { ProjectStatus } from '@/schemas/common';
 import type { Terms } from '@/engine/types';
+import type { JournalTag } from '@/schemas/journal';
 
 export interface HookOut {
   mm: number;
@@ -19,7 +20,8 @@ export interface RoundCheckOut {
   problems: Array<{ message: string; column: number | null; severity: 'error' | 'warning' }>;
 }
 
-export interface PatternPiece {
+/** What a pattern's piece and a project's copy of it have in common. */
+export interface PieceBase {
   id: number;
   position: number;
   name: string;
@@ -28,6 +30,9 @@ export interface PatternPiece {
   hook: HookOut | null;
   yarns: string[];
   instructions: string;
+}
+
+export interface PatternPiece extends PieceBase {
   check: { rounds: RoundCheckOut[]; problemCount: number };
 }
 
@@ -98,15 +103,7 @@ export interface Placement {
   createdAt: string;
 }
 
-export interface ProjectPiece {
-  id: number;
-  position: number;
-  name: string;
-  copies: number;
-  hookMm: number | null;
-  hook: HookOut | null;
-  yarns: string[];
-  instructions: string;
+export interface ProjectPiece extends PieceBase {
   progress: PieceProgress;
   /** From the stitch engine over this piece's own instructions. */
   totals: { rounds: number; stepsPerCopy: number; copiesDone: number; roundsDone: number };
@@ -137,7 +134,7 @@ export interface JournalEntry {
   /** YYYY-MM-DD, the maker's day. */
   entryDate: string;
   minutes: number | null;
-  tags: Array<'progress' | 'change' | 'placement' | 'problem' | 'finished'>;
+  tags: JournalTag[];
   onShowcase: boolean;
   photos: JournalPhoto[];
   createdAt: string;
