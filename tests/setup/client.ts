@@ -13,9 +13,13 @@ const inFlight = new Set<string>();
 server.events.on('request:start', ({ requestId }) => void inFlight.add(requestId));
 server.events.on('request:end', ({ requestId }) => void inFlight.delete(requestId));
 
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+// MSW announces a request a few ticks after fetch() is called, so "nothing in flight" must hold across a pause.
 async function networkIdle(limitMs = 3000) {
   const until = Date.now() + limitMs;
-  while (inFlight.size && Date.now() < until) await new Promise((r) => setTimeout(r, 10));
+  do await sleep(20);
+  while (inFlight.size && Date.now() < until);
   inFlight.clear();
 }
 
