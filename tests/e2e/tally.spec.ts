@@ -105,6 +105,9 @@ test('two devices on the same piece see each other’s taps', async ({ browser }
   await b.goto(url);
   await expect(zone(a)).toContainText('sc in the magic ring (1 of 6)');
   await expect(zone(b)).toContainText('sc in the magic ring (1 of 6)');
+  // Both screens say when they are live with the other device.
+  await expect(a.getByTitle('Live with your other devices')).toBeVisible();
+  await expect(b.getByTitle('Live with your other devices')).toBeVisible();
 
   for (let i = 0; i < 3; i += 1) await zone(a).click();
   await expect(zone(b)).toContainText('sc in the magic ring (4 of 6)', { timeout: 5_000 });

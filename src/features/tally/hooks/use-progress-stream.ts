@@ -38,6 +38,8 @@ export function useProgressStream(pieceId: number): StreamState {
     source.addEventListener('open', () => {
       stopPolling();
       setState('live');
+      // Taps another device made before this stream opened (or while it was down) were never sent to it.
+      void qc.invalidateQueries({ queryKey: tallyKeys.progress(pieceId) });
       // Whatever queued up while the line was down can go now.
       outbox.wake();
     });
