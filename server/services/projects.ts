@@ -14,7 +14,10 @@ import { HttpError, notFound } from '../lib/http-error.js';
 import { deleteProjectPhotoFiles } from '../lib/storage.js';
 import { ownedProject } from './ownership.js';
 import { photoOut, type PhotoRow } from './photos.js';
-import { shapeForInstructions, tallyTotals } from './progress.js';
+import { hubFor, shapeForInstructions, tallyTotals, type StreamMessage } from './progress.js';
+import { checkPiece } from '../../src/engine/index.js';
+import { copiesProblem, reworkPiece, reworkRounds } from '../../src/schemas/piece-rework.js';
+import { samePosition, type Position } from '../../src/schemas/progress-position.js';
 import { parseJson, readMaterials } from '../lib/json-columns.js';
 
 type CreateInput = z.output<typeof CreateProjectSchema>;
@@ -232,8 +235,11 @@ export async function createProject(ctx: AppContext, userId: string, input: Crea
 }
 
 export async function updateProject(ctx: AppContext, userId: string, projectId: number, input: UpdateInput) {
-  await ctx.db.transaction(async (trx) => {
+  const moved = await ctx.db.transaction(async (trx) => {
     const row = await ownedProject(trx, userId, projectId);
+    const terms = input.terms ?? row.terms;
+    // What the Tally has counted so far, read before anything changes (a new reading may move it).
+    const before = input.pieces || terms !== row.terms ? await countedPieces(trx, row.id) : new Map<number, CountedPiece>();
     const patch: Row = { updated_at: nowIso() };
     if (input.title !== undefined) patch.title = input.title;
     if (input.terms !== undefined) patch.terms = input.terms;
@@ -255,13 +261,90 @@ export async function updateProject(ctx: AppContext, userId: string, projectId: 
       if (input.visibility !== 'private' && !row.share_token) patch.share_token = crypto.randomBytes(18).toString('base64url');
     }
     await trx('projects').where({ id: row.id }).update(patch);
-    if (input.pieces) await replacePieces(trx, row.id, input.pieces);
+    if (input.pieces) await replacePieces(trx, row.id, input.pieces, before);
+    return moveCounts(trx, before, row.terms, terms);
   });
+  // Only after the commit: an open Tally on another device takes the moved count from here.
+  const hub = hubFor(ctx.db);
+  for (const m of moved) hub.emit(`piece:${m.pieceId}`, { type: 'progress', progress: m.progress, opId: null } satisfies StreamMessage);
   return getProject(ctx, userId, projectId);
 }
 
+interface CountedPiece {
+  id: number;
+  name: string;
+  instructions: string;
+  copies: number;
+  progress: Row | null;
+  /** Highest copy a placement is recorded on (0 for none). */
+  markedCopy: number;
+}
+
+/** The project's pieces that have a Tally count or a placement, with what they read like now. */
+async function countedPieces(trx: Knex.Transaction, projectId: number): Promise<Map<number, CountedPiece>> {
+  const rows: Row[] = await trx('project_pieces as pp')
+    .leftJoin('piece_progress as pr', 'pr.piece_id', 'pp.id')
+    .where('pp.project_id', projectId)
+    .select('pp.id', 'pp.name', 'pp.instructions', 'pp.copies', 'pr.piece_id as progress_id', 'pr.copy', 'pr.round', 'pr.step', 'pr.done', 'pr.version')
+    .select(trx.raw('(select max(pl.copy) from placements pl where pl.piece_id = pp.id) as marked_copy'));
+  const out = new Map<number, CountedPiece>();
+  for (const r of rows) {
+    if (r.progress_id == null && r.marked_copy == null) continue;
+    out.set(r.id, {
+      id: r.id,
+      name: r.name,
+      instructions: r.instructions ?? '',
+      copies: r.copies,
+      progress: r.progress_id == null ? null : { copy: r.copy, round: r.round, step: r.step, done: r.done, version: r.version },
+      markedCopy: Number(r.marked_copy ?? 0),
+    });
+  }
+  return out;
+}
+
+const positionOf = (p: Row): Position => ({ copy: p.copy, round: p.round, step: p.step });
+
+/**
+ * Moves the Tally count of every counted piece whose reading changed (its instructions, copies or the project's
+ * terms) with the same rules the project page showed the maker before saving (src/schemas/piece-rework.ts).
+ * The undo history moves with it, so an undo after the edit lands on the same written round as before.
+ */
+async function moveCounts(trx: Knex.Transaction, before: Map<number, CountedPiece>, oldTerms: 'us' | 'uk', newTerms: 'us' | 'uk') {
+  const moved: Array<{ pieceId: number; progress: PieceProgress }> = [];
+  const counted = [...before.values()].filter((p) => p.progress);
+  if (!counted.length) return moved;
+  const now: Row[] = await trx('project_pieces').whereIn('id', counted.map((p) => p.id)).select('id', 'instructions', 'copies');
+  for (const piece of now) {
+    const was = before.get(piece.id)!;
+    const progress = was.progress!;
+    if (piece.instructions === was.instructions && piece.copies === was.copies && oldTerms === newTerms) continue;
+    const rework = reworkPiece({
+      before: { rounds: reworkRounds(checkPiece(was.instructions, { terms: oldTerms }).rounds), copies: was.copies },
+      after: { rounds: reworkRounds(checkPiece(piece.instructions ?? '', { terms: newTerms }).rounds), copies: piece.copies },
+      position: positionOf(progress),
+    });
+    if (samePosition(rework.to, positionOf(progress)) && rework.done === progress.done) continue;
+    const updatedAt = nowIso();
+    const out: PieceProgress = { ...rework.to, done: rework.done, version: progress.version + 1, updatedAt };
+    await trx('piece_progress').where({ piece_id: piece.id }).update({ ...rework.to, done: rework.done, version: out.version, updated_at: updatedAt });
+    const events: Row[] = await trx('progress_events').where({ piece_id: piece.id }).select('id', 'before', 'after');
+    for (const e of events) {
+      const change: Row = {};
+      for (const column of ['before', 'after'] as const) {
+        const p = parseJson<Position | null>(e[column], null);
+        if (!p) continue;
+        const next = rework.map(p);
+        if (!samePosition(next, p)) change[column] = JSON.stringify(next);
+      }
+      if (Object.keys(change).length) await trx('progress_events').where({ id: e.id }).update(change);
+    }
+    moved.push({ pieceId: piece.id, progress: out });
+  }
+  return moved;
+}
+
 /** Pieces with an id are changed, new ones added, and the ones left out removed (with their Tally progress). */
-async function replacePieces(trx: Knex.Transaction, projectId: number, pieces: NonNullable<UpdateInput['pieces']>) {
+async function replacePieces(trx: Knex.Transaction, projectId: number, pieces: NonNullable<UpdateInput['pieces']>, counted: Map<number, CountedPiece>) {
   const existing: Row[] = await trx('project_pieces').where({ project_id: projectId });
   const byId = new Map(existing.map((p) => [p.id, p]));
   const kept = new Set<number>();
@@ -273,6 +356,12 @@ async function replacePieces(trx: Knex.Transaction, projectId: number, pieces: N
       ]);
     }
     kept.add(piece.id);
+    // Fewer copies than the one being worked would leave the Tally counting a copy that no longer exists.
+    const c = counted.get(piece.id);
+    if (c && piece.copies !== undefined && piece.copies !== c.copies) {
+      const problem = copiesProblem(piece.name, c.progress ? positionOf(c.progress) : { copy: 1, round: 0, step: 0 }, piece.copies, [c.markedCopy]);
+      if (problem) throw new HttpError(422, problem, [{ path: `pieces.${i}.copies`, message: problem }]);
+    }
   }
   const removed = existing.filter((p) => !kept.has(p.id)).map((p) => p.id);
   if (removed.length) await trx('project_pieces').whereIn('id', removed).delete();

@@ -16,17 +16,25 @@ const MaterialsPatchSchema = z
   .strict();
 const Title = z.string().trim().min(1, { message: 'Give the project a title.' }).max(120, { message: 'Keep the title under 120 characters.' });
 
+// How many to make, as typed in a form: required there (the API defaults it to 1).
+const Copies = z.coerce
+  .number({ message: 'How many to make is a number.' })
+  .int({ message: 'How many to make is a whole number.' })
+  .min(1, { message: 'Make at least 1.' })
+  .max(50, { message: 'At most 50 copies of one piece.' });
+const YarnName = z.string().trim().min(1, { message: 'A yarn needs a name.' }).max(120, { message: 'Keep a yarn name under 120 characters.' });
+
 export const ProjectPieceInputSchema = z.object({
   name: z.string().trim().min(1, { message: 'Give the piece a name, like "Body" or "Ear".' }).max(80, { message: 'Keep the piece name under 80 characters.' }),
   instructions: z.string().max(20_000, { message: 'Instructions are limited to 20,000 characters per piece.' }).default(''),
-  copies: z.coerce
-    .number({ message: 'How many to make is a number.' })
-    .int({ message: 'How many to make is a whole number.' })
-    .min(1, { message: 'Make at least 1.' })
-    .max(50, { message: 'At most 50 copies of one piece.' })
-    .default(1),
-  hookMm: z.number().min(0.5, { message: 'A hook is at least 0.5 mm.' }).max(35, { message: 'A hook is at most 35 mm.' }).nullable().optional(),
-  yarns: z.array(z.string().trim().min(1).max(120)).max(20).optional(),
+  copies: Copies.default(1),
+  hookMm: z
+    .number({ message: 'Give the hook in millimetres, like 3.5.' })
+    .min(0.5, { message: 'A hook is at least 0.5 mm.' })
+    .max(35, { message: 'A hook is at most 35 mm.' })
+    .nullable()
+    .optional(),
+  yarns: z.array(YarnName).max(20, { message: 'At most 20 yarns for one piece.' }).optional(),
 });
 export type ProjectPieceInput = z.input<typeof ProjectPieceInputSchema>;
 
@@ -88,8 +96,19 @@ export const NewProjectFormSchema = z.object({
   recipient: optionalText(120).optional(),
   forYoungChild: z.boolean(),
   status: ProjectStatusSchema,
-  pieces: z.array(ProjectPieceInputSchema.extend({ copies: z.coerce.number({ message: 'How many to make is a number.' }).int({ message: 'How many to make is a whole number.' }).min(1, { message: 'Make at least 1.' }).max(50, { message: 'At most 50 copies of one piece.' }) })).max(40),
+  pieces: z.array(ProjectPieceInputSchema.extend({ copies: Copies })).max(40),
   notions: z.array(NotionSchema).max(50),
   notes: optionalText(10_000).optional(),
 });
 export type NewProjectFormValues = z.input<typeof NewProjectFormSchema>;
+
+/** One piece as the project page edits it (every field shown); sent on as one of UpdateProjectSchema's pieces. */
+export const ProjectPieceFormSchema = ProjectPieceInputSchema.extend({
+  id: z.number().int().positive().optional(),
+  copies: Copies,
+  instructions: ProjectPieceInputSchema.shape.instructions.unwrap(),
+  hookMm: ProjectPieceInputSchema.shape.hookMm.unwrap(),
+  yarns: z.array(YarnName).max(20, { message: 'At most 20 yarns for one piece.' }),
+});
+export type ProjectPieceFormValues = z.input<typeof ProjectPieceFormSchema>;
+export type ProjectPieceFormOutput = z.output<typeof ProjectPieceFormSchema>;
