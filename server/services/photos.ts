@@ -5,7 +5,6 @@ import type { AppContext } from '../context.js';
 import { HttpError, notFound, type IssueOut } from '../lib/http-error.js';
 import { deletePhotoFiles, newStorageKey, writePhotoFiles } from '../lib/storage.js';
 import { imagePool } from '../workers/image-pool.js';
-import { isShowcaseOpen } from './share.js';
 import { PHOTO_LIMITS } from '../../src/schemas/journal.js';
 import type { ImageFormat, ImageJob } from '../workers/image.js';
 import type { PhotoOut } from '../../src/types/api.js';
@@ -48,38 +47,26 @@ export function photoOut(row: PhotoRow): PhotoOut {
 }
 
 /**
- * Who may see a photo, the one rule every photo-serving path uses (the /media route serves every photo URL,
- * the showcase's included): its project's owner while their account is open; anyone else, signed in or not,
- * exactly while the project's showcase is open (isShowcaseOpen: shared by link or publicly, not taken down by
- * an admin, owner not disabled), so a page that answers 404 never leaves its photos reachable. A disabled
- * owner has no session, and their photos are served to no one. Everyone refused gets the same 404 as for a
- * photo that does not exist.
+ * Who may see a photo through its own URL (/media/photos/<key>/…): its project's owner while their account is open,
+ * no one else, whether or not the project is shared. Visitors of a shared page get the photos the page shows
+ * through that link's own URLs (/media/shared/<token>/<ref>/…, services/share.ts), which stop working the moment
+ * the link is replaced or closed; a photo URL copied from the page cannot outlive its link. A disabled owner has
+ * no session, and the rule refuses them too. Everyone refused gets the same 404 as for a photo that does not exist.
  */
-export async function canViewPhoto(
-  db: Knex,
-  user: { id: string } | null | undefined,
-  photo: Pick<PhotoRow, 'id' | 'project_id' | 'entry_id'>,
-) {
+export async function canViewPhoto(db: Knex, user: { id: string } | null | undefined, photo: Pick<PhotoRow, 'project_id'>) {
+  if (!user) return false;
   const project = await db('projects as p')
     .join('users as u', 'u.id', 'p.owner_id')
     .where('p.id', photo.project_id)
-    .first('p.owner_id', 'p.cover_photo_id', 'u.disabled_at');
-  if (!project || project.disabled_at) return false;
-  if (user && project.owner_id === user.id) return true;
-  if (!(await isShowcaseOpen(db, photo.project_id))) return false;
-  // Others see exactly the photos the showcase shows (share.ts showcasePhotos): the cover, photos of the
-  // project itself, and photos of entries the owner put on the showcase — not those of private entries.
-  if (project.cover_photo_id === photo.id || !photo.entry_id) return true;
-  const entry = await db('journal_entries').where({ id: photo.entry_id }).first('on_showcase');
-  return Boolean(entry?.on_showcase);
+    .first('p.owner_id', 'u.disabled_at');
+  return Boolean(project && !project.disabled_at && project.owner_id === user.id);
 }
 
-/** Cache-Control for a photo: only one everybody may see can sit in shared caches. */
-export async function photoCacheControl(db: Knex, photo: Pick<PhotoRow, 'project_id'>) {
-  // An hour either way, so that making a project private again (or an admin's take-down) reaches browsers
-  // within the hour; the check above refuses new requests at once.
-  return (await isShowcaseOpen(db, photo.project_id)) ? 'public, max-age=3600' : 'private, max-age=3600';
-}
+/**
+ * The owner's own copy: cached for an hour in their browser only (Vary: Cookie), never in a shared cache. A key
+ * names one picture forever (edits make new keys), so the copy never goes stale.
+ */
+export const OWNER_PHOTO_CACHE = 'private, max-age=3600';
 
 export async function photoByKey(db: Knex, key: string): Promise<PhotoRow | undefined> {
   return db('photos').where({ storage_key: key }).first();

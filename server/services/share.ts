@@ -12,6 +12,7 @@ import { categoryForPly, yarnWeightLabel } from '../../src/reference/yarn-weight
 import { cautionsFor } from '../../src/reference/safety.js';
 import type { MakerProfile, ShareStatus, Showcase as ShowcaseView, ShowcasePhoto, ShowcaseYarn } from '../../src/types/showcase.js';
 import { parseJson, readMaterials } from '../lib/json-columns.js';
+import type { PhotoRow } from './photos.js';
 
 export type { MakerProfile, ShareStatus, ShowcasePhoto, ShowcaseView, ShowcaseYarn };
 
@@ -26,7 +27,19 @@ export const newShareToken = () => crypto.randomBytes(18).toString('base64url');
 
 export const sharePath = (token: string) => `/p/${token}`;
 export const profilePath = (makerId: string) => `/m/${makerId}`;
-export const photoUrls = (key: string) => ({ url: `/media/photos/${key}/display.jpg`, thumbUrl: `/media/photos/${key}/thumb.jpg` });
+
+/**
+ * A photo's name on one shared link: HMAC-SHA256 of its storage key, keyed by the link's token, cut to 144 bits.
+ * Visitors only ever get photos through /media/shared/<token>/<ref>/…, so a new link (or private again) retires
+ * every photo URL of the old page at once, and the storage key, which names the owner's own private URL
+ * (/media/photos/<key>/…, owner only), never reaches a visitor.
+ */
+export const sharedPhotoRef = (token: string, storageKey: string) => crypto.createHmac('sha256', token).update(storageKey).digest('base64url').slice(0, 24);
+export const SHARED_PHOTO_REF = /^[A-Za-z0-9_-]{24}$/;
+export const sharedPhotoUrls = (token: string, storageKey: string) => {
+  const base = `/media/shared/${token}/${sharedPhotoRef(token, storageKey)}`;
+  return { url: `${base}/display.jpg`, thumbUrl: `${base}/thumb.jpg` };
+};
 
 const nowIso = () => new Date().toISOString();
 
@@ -124,27 +137,56 @@ async function makerHasPublicPage(db: Knex, ownerId: string) {
   return Boolean(row);
 }
 
-/** The photos a visitor sees: the cover first, then project photos and those of entries marked for the showcase. */
-async function showcasePhotos(db: Knex, project: Row, shownEntryIds: number[]): Promise<ShowcasePhoto[]> {
-  const rows: Row[] = await db('photos')
-    .where('project_id', project.id)
-    .andWhere((q) => {
-      q.whereNull('entry_id');
-      if (shownEntryIds.length) q.orWhereIn('entry_id', shownEntryIds);
-      if (project.cover_photo_id) q.orWhere('id', project.cover_photo_id);
+/**
+ * The one rule for which photos a visitor may see, used by the page, the maker profile and the photo route alike:
+ * photos of the project itself and photos of journal entries the owner put on the showcase. A photo of an entry
+ * that is not on the showcase stays private even when the owner chose it as the cover (the page then opens with
+ * the first photo it does show, and the owner's share panel says so).
+ */
+function visiblePhotoQuery(db: Knex, projectIds: number[]) {
+  return db('photos as ph')
+    .leftJoin('journal_entries as e', function (this: Knex.JoinClause) {
+      this.on('e.id', '=', 'ph.entry_id').andOn('e.project_id', '=', 'ph.project_id');
     })
-    .orderBy([{ column: 'created_at' }, { column: 'id' }]);
-  const coverId = project.cover_photo_id ?? null;
-  rows.sort((a, b) => Number(b.id === coverId) - Number(a.id === coverId));
+    .whereIn('ph.project_id', projectIds)
+    .andWhere((q) => q.whereNull('ph.entry_id').orWhere('e.on_showcase', true))
+    .orderBy([{ column: 'ph.created_at' }, { column: 'ph.id' }])
+    .select('ph.*');
+}
+
+/** The chosen cover first when the page shows it, else the photos in the order they were added. */
+const coverFirst = (rows: Row[], coverId: number | null) => [...rows].sort((a, b) => Number(b.id === coverId) - Number(a.id === coverId));
+
+async function showcasePhotos(db: Knex, project: Row, token: string): Promise<ShowcasePhoto[]> {
+  const rows = coverFirst(await visiblePhotoQuery(db, [project.id]), project.cover_photo_id ?? null);
   return rows.map((r, i) => ({
-    id: r.id,
-    ...photoUrls(r.storage_key),
+    // A position, not the row id: global ids would tell a visitor how many photos exist elsewhere.
+    id: i + 1,
+    ...sharedPhotoUrls(token, r.storage_key),
     width: r.width,
     height: r.height,
     alt: r.alt?.trim() || `Photo ${i + 1} of ${project.title}`,
-    // Without a chosen cover the first photo stands in for it.
-    cover: coverId ? r.id === coverId : i === 0,
+    // Without a chosen cover the page can show, the first photo stands in for it.
+    cover: i === 0,
   }));
+}
+
+/**
+ * The photo a shared photo URL names, while its link is the project's current one and the photo is one the page
+ * shows; otherwise 404, the same as for a photo that does not exist.
+ */
+export async function sharedPhotoByRef(db: Knex, token: string, ref: string): Promise<PhotoRow> {
+  if (!SHARED_PHOTO_REF.test(ref)) throw notFound('That photo');
+  let project: Row;
+  try {
+    project = await sharedProjectByToken(db, token);
+  } catch {
+    throw notFound('That photo');
+  }
+  const rows: PhotoRow[] = await visiblePhotoQuery(db, [project.id]);
+  const photo = rows.find((r) => sharedPhotoRef(token, r.storage_key) === ref);
+  if (!photo) throw notFound('That photo');
+  return photo;
 }
 
 export async function cheerSummary(db: Knex, projectId: number, viewerId: string | null) {
@@ -176,7 +218,8 @@ export async function showcaseView(ctx: AppContext, token: string, viewer: User 
   const entries: Row[] = await db('journal_entries')
     .where({ project_id: project.id, on_showcase: true })
     .orderBy([{ column: 'entry_date' }, { column: 'id' }]);
-  const shown = entries.map((e) => ({ id: e.id as number, date: e.entry_date as string, body: e.body as string, minutes: (e.minutes ?? null) as number | null, tags: parseJson<string[]>(e.tags, []) }));
+  // Positions, not row ids, for the same reason as the photos'.
+  const shown = entries.map((e, i) => ({ id: i + 1, date: e.entry_date as string, body: e.body as string, minutes: (e.minutes ?? null) as number | null, tags: parseJson<string[]>(e.tags, []) }));
 
   const { count: commentCount } = (await db('comments').where({ project_id: project.id }).whereNull('hidden_at').count({ count: '*' }).first()) as { count: number };
 
@@ -210,7 +253,7 @@ export async function showcaseView(ctx: AppContext, token: string, viewer: User 
     }),
     changes: shown.filter((e) => e.tags.includes('change')).map(({ id, date, body }) => ({ id, date, body })),
     journal: shown.filter((e) => !e.tags.includes('change')),
-    photos: await showcasePhotos(db, project, shown.map((e) => e.id)),
+    photos: await showcasePhotos(db, project, token),
     cautions: cautionsFor({ forYoungChild: Boolean(project.for_young_child), notions: materials.notions }),
     cheers: await cheerSummary(db, project.id, viewer?.id ?? null),
     commentCount: Number(commentCount),
@@ -235,6 +278,8 @@ export async function shareStatus(db: Knex, userId: string, projectId: number, o
   const row = await ownedProject(db, userId, projectId);
   const count = async (q: Knex.QueryBuilder) => Number(((await q.count({ count: '*' }).first()) as { count: number }).count);
   const open = row.visibility !== 'private' && row.share_token && !row.showcase_hidden_at;
+  // The photos the page shows (not every photo of the project), so the count matches what friends see.
+  const shownPhotos: Row[] = await visiblePhotoQuery(db, [row.id]);
   return {
     visibility: row.visibility,
     sharePath: open ? sharePath(row.share_token) : null,
@@ -245,7 +290,8 @@ export async function shareStatus(db: Knex, userId: string, projectId: number, o
     commentCount: await count(db('comments').where({ project_id: row.id }).whereNull('hidden_at')),
     hiddenCommentCount: await count(db('comments').where({ project_id: row.id }).whereNotNull('hidden_at')),
     shownEntryCount: await count(db('journal_entries').where({ project_id: row.id, on_showcase: true })),
-    photoCount: await count(db('photos').where({ project_id: row.id })),
+    photoCount: shownPhotos.length,
+    coverHidden: Boolean(row.cover_photo_id) && !shownPhotos.some((p) => p.id === row.cover_photo_id),
   };
 }
 
@@ -275,20 +321,20 @@ export async function makerProfile(db: Knex, makerId: string): Promise<MakerProf
     .orderBy('id', 'desc');
   if (!rows.length) throw notFound('That maker');
   const ids = rows.map((r) => r.id);
-  const photoRows: Row[] = await db('photos').whereIn('project_id', ids).orderBy([{ column: 'created_at' }, { column: 'id' }]);
+  const photoRows: Row[] = await visiblePhotoQuery(db, ids);
   const cheerRows: Row[] = await db('cheers').whereIn('project_id', ids).groupBy('project_id').select('project_id').count({ count: '*' });
   const cheersBy = new Map(cheerRows.map((c) => [c.project_id, Number(c.count)]));
   return {
     maker: { id: maker.id, displayName: maker.display_name },
     projects: rows.map((r) => {
-      // The cover, or else a project-level photo: a photo from an unmarked journal entry is not the profile's to show.
-      const photo = photoRows.find((p) => p.project_id === r.id && p.id === r.cover_photo_id) ?? photoRows.find((p) => p.project_id === r.id && p.entry_id == null);
+      // What the project's own page opens with: its cover if the page shows it, else the first photo it shows.
+      const photo = coverFirst(photoRows.filter((p) => p.project_id === r.id), r.cover_photo_id ?? null)[0];
       return {
         title: r.title,
         url: sharePath(r.share_token),
         statusLabel: projectStatusLabels[r.status as ProjectStatus] ?? r.status,
         finishedOn: r.finished_on ?? null,
-        cover: photo ? { ...photoUrls(photo.storage_key), alt: photo.alt?.trim() || `Photo of ${r.title}` } : null,
+        cover: photo ? { ...sharedPhotoUrls(r.share_token, photo.storage_key), alt: photo.alt?.trim() || `Photo of ${r.title}` } : null,
         cheerCount: cheersBy.get(r.id) ?? 0,
       };
     }),

@@ -83,7 +83,10 @@ export interface ShareStatus {
   commentCount: number;
   hiddenCommentCount: number;
   shownEntryCount: number;
+  /** Photos the page shows: the project's own and those of entries on the showcase. */
   photoCount: number;
+  /** The chosen cover is in a journal entry the page does not show, so the page opens with another photo. */
+  coverHidden?: boolean;
 }
 
 export interface MakerProfile {

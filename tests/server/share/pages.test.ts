@@ -3,6 +3,7 @@ import request from 'supertest';
 import { createTestContext, type TestContext } from '../../setup/test-app.js';
 import { createTestUser, signedInAgent } from '../../factories/users.js';
 import { createShowcaseProject, PRIVATE_MARKERS } from '../../factories/share.js';
+import { sharedPhotoRef } from '../../../server/services/share.js';
 
 let t: TestContext;
 beforeAll(async () => {
@@ -34,8 +35,10 @@ describe('GET /p/:token (server-rendered head for link previews)', () => {
     expect(meta(html, 'og:title')).toBe('Moss the hedgehog');
     expect(meta(html, 'og:url')).toBe(`http://share.example:8080/p/${p.token}`);
     expect(html).toContain(`<link rel="canonical" href="http://share.example:8080/p/${p.token}" />`);
-    // og:image must be absolute (Open Graph protocol, ogp.me): the cover's display variant.
-    expect(meta(html, 'og:image')).toBe(`http://share.example:8080/media/photos/${p.coverKey}/display.jpg`);
+    // og:image must be absolute (Open Graph protocol, ogp.me): the cover's display variant, through this link.
+    expect(meta(html, 'og:image')).toBe(`http://share.example:8080/media/shared/${p.token}/${sharedPhotoRef(p.token, p.coverKey)}/display.jpg`);
+    // The storage key names the owner's own URL; it stays out of the page.
+    expect(html).not.toContain(p.coverKey);
     expect(meta(html, 'og:image:alt')).toBe('Moss the hedgehog on a windowsill');
     expect(meta(html, 'twitter:card')).toBe('summary_large_image');
     expect(meta(html, 'twitter:image')).toBe(meta(html, 'og:image'));
@@ -52,7 +55,7 @@ describe('GET /p/:token (server-rendered head for link previews)', () => {
       const p = await createShowcaseProject(t2.db, owner.id, { visibility: 'public' });
       const html = (await request(t2.app).get(`/p/${p.token}`).set('Host', 'evil.example')).text;
       expect(meta(html, 'og:url')).toBe(`https://whorlbook.example/p/${p.token}`);
-      expect(meta(html, 'og:image')).toBe(`https://whorlbook.example/media/photos/${p.coverKey}/display.jpg`);
+      expect(meta(html, 'og:image')).toBe(`https://whorlbook.example/media/shared/${p.token}/${sharedPhotoRef(p.token, p.coverKey)}/display.jpg`);
       expect(meta(html, 'robots')).toBeUndefined();
     } finally {
       await t2.close();

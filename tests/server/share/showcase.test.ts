@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestContext, type TestContext } from '../../setup/test-app.js';
 import { createTestUser, signedInAgent } from '../../factories/users.js';
-import { createShowcaseProject, PRIVATE_MARKERS } from '../../factories/share.js';
+import { createShowcaseProject, PRIVATE_MARKERS, type ShowcaseFixture } from '../../factories/share.js';
 import { placementText } from '../../../server/services/share.js';
 
 let t: TestContext;
@@ -73,10 +73,14 @@ describe('what the public view holds', () => {
   let body: any;
   let token: string;
   let ownerEmail: string;
+  let fixture: ShowcaseFixture;
   beforeAll(async () => {
     const owner = await createTestUser(t.db, { displayName: 'Rowan Tull' });
     ownerEmail = owner.email;
+    // Someone else's project first, so this fixture's row ids cannot coincide with positions.
+    await createShowcaseProject(t.db, (await createTestUser(t.db)).id);
     const p = await createShowcaseProject(t.db, owner.id);
+    fixture = p;
     token = p.token;
     body = (await request(t.app).get(`/api/share/${p.token}`)).body.showcase;
   });
@@ -142,9 +146,21 @@ describe('what the public view holds', () => {
   it('shows the cover first, then project photos and photos of marked entries — never those of private entries', () => {
     expect(body.photos.map((p: { alt: string }) => p.alt)).toEqual(['Moss the hedgehog on a windowsill', 'The body after stuffing']);
     expect(body.photos[0].cover).toBe(true);
-    expect(body.photos[0].url).toMatch(/^\/media\/photos\/[A-Za-z0-9_-]{24}\/display\.jpg$/);
-    expect(body.photos[0].thumbUrl).toMatch(/^\/media\/photos\/[A-Za-z0-9_-]{24}\/thumb\.jpg$/);
+    // Photo URLs go through this link, never the owner's own /media/photos/<key> URL.
+    expect(body.photos[0].url).toMatch(new RegExp(`^/media/shared/${token}/[A-Za-z0-9_-]{24}/display\\.jpg$`));
+    expect(body.photos[0].thumbUrl).toMatch(new RegExp(`^/media/shared/${token}/[A-Za-z0-9_-]{24}/thumb\\.jpg$`));
     expect(JSON.stringify(body)).not.toContain('Receipt for the yarn');
+    for (const key of [fixture.coverKey, fixture.shownEntryPhotoKey, fixture.privateEntryPhotoKey]) expect(JSON.stringify(body)).not.toContain(key);
+  });
+
+  it('numbers photos and journal entries by position, never by their row ids', async () => {
+    expect(body.photos.map((p: { id: number }) => p.id)).toEqual([1, 2]);
+    expect([...body.journal, ...body.changes].map((e: { id: number }) => e.id).sort()).toEqual([1, 2]);
+    // The fixture's rows come after others' in this database, so their real ids are larger than any position.
+    const entryIds: number[] = await t.db('journal_entries').where({ project_id: fixture.id }).pluck('id');
+    const photoIds: number[] = await t.db('photos').where({ project_id: fixture.id }).pluck('id');
+    expect(Math.min(...entryIds, ...photoIds, fixture.id)).toBeGreaterThan(2);
+    expect(JSON.stringify(body)).not.toMatch(new RegExp(`"id":(${[...entryIds, ...photoIds, fixture.id].join('|')})[,}]`));
   });
 
   it('carries the small-parts caution because the project uses safety eyes', () => {
@@ -220,7 +236,8 @@ describe('sharing and retiring links (owner only)', () => {
     const p = await createShowcaseProject(t.db, user.id, { visibility: 'public' });
     const res = await agent.get(`/api/projects/${p.id}/share`);
     expect(res.status).toBe(200);
-    expect(res.body.share).toMatchObject({ visibility: 'public', sharePath: `/p/${p.token}`, profilePath: `/m/${user.id}`, hiddenByAdmin: false, cheerCount: 0, commentCount: 0, shownEntryCount: 2, photoCount: 3 });
+    // Three photos, but the one on the private entry is not on the page.
+    expect(res.body.share).toMatchObject({ visibility: 'public', sharePath: `/p/${p.token}`, profilePath: `/m/${user.id}`, hiddenByAdmin: false, cheerCount: 0, commentCount: 0, shownEntryCount: 2, photoCount: 2, coverHidden: false });
   });
 });
 

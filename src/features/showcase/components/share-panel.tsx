@@ -123,8 +123,13 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
                 </label>
                 <p id={`${name}-counts`} className="tabular text-sm text-ink/70 dark:text-oat/70">
                   {plural(share.cheerCount, 'cheer')} · {plural(share.commentCount, 'comment')}
-                  {share.hiddenCommentCount ? ` · ${share.hiddenCommentCount} hidden` : ''} · {plural(share.photoCount, 'photo')}
+                  {share.hiddenCommentCount ? ` · ${share.hiddenCommentCount} hidden` : ''} · {plural(share.photoCount, 'photo')} on the page
                 </p>
+                {share.coverHidden ? (
+                  <Banner tone="info" title="Your cover is not on the page">
+                    It belongs to a journal entry that is not shown, so the page opens with another photo. Tick “Show this entry when I share the project” on that entry to use it.
+                  </Banner>
+                ) : null}
                 <div className="flex flex-wrap gap-2">
                   <Button onClick={copy}>
                     {copied ? <Check aria-hidden className="h-5 w-5" /> : <Copy aria-hidden className="h-5 w-5" />}
@@ -166,7 +171,7 @@ export function SharePanel({ projectId, title, onChanged }: { projectId: number;
 
             <p className="mt-4 text-sm text-ink/70 dark:text-oat/70">
               The page shows photos, materials, pieces and placements. From the journal it shows only the entries you tick “Show this entry when I share the project”
-              {share.shownEntryCount ? ` (${share.shownEntryCount} marked now)` : ' (none marked yet)'}; marked entries tagged as a change appear under “Changes from the pattern”. Your e-mail address, notes and who it is for never appear.
+              {share.shownEntryCount ? ` (${share.shownEntryCount} marked now)` : ' (none marked yet)'}, with their photos; marked entries tagged as a change appear under “Changes from the pattern”. Your e-mail address, notes and who it is for never appear. A new link also retires the photo links of the old page.
             </p>
 
             <div className="mt-4 border-t border-wool pt-3 dark:border-[#4a423c]">
