@@ -21,12 +21,18 @@ test('a new visitor signs in as the demo maker and sees the demo project on the 
 
   await expect(page.getByRole('heading', { name: 'On the hook' })).toBeVisible();
   await expect(page.getByText('Bramble for the window sill')).toBeVisible();
+  // The demo Body was left at its tenth round; home offers the way straight back into the Tally.
+  await expect(page.getByText('Body · round 10 of 17')).toBeVisible();
 
   // Quicksand is the font actually in use, loaded from our own server.
   const font = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
   expect(font).toContain('Quicksand');
   await page.evaluate(() => document.fonts.ready);
   expect(await page.evaluate(() => document.fonts.check('16px Quicksand'))).toBe(true);
+
+  await page.getByRole('link', { name: /^Go on counting Body/ }).click();
+  await expect(page).toHaveURL(/\/projects\/\d+\/pieces\/\d+\/count$/);
+  await expect(page.getByText(/Rnd 10\s*of 17/).first()).toBeVisible();
 
   expect(foreign, 'the page must load nothing from another host').toEqual([]);
   expect(consoleErrors).toEqual([]);

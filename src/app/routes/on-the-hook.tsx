@@ -7,6 +7,7 @@ import { useMe } from '@/features/auth/api/get-me';
 import { useProjects } from '@/features/projects/api/get-projects';
 import { projectStatusLabels } from '@/schemas/common';
 import { paths } from '@/config/paths';
+import { ResumeLine } from '@/features/home/components/resume-line';
 
 /** Home: what is being worked now, one tap from the Tally. */
 export default function OnTheHookRoute() {
@@ -31,8 +32,8 @@ export default function OnTheHookRoute() {
         <ul className="grid gap-4 sm:grid-cols-2">
           {onHook.data.map((p) => (
             <li key={p.id}>
-              <Link to={paths.project(p.id)} className="block rounded-blob focus-visible:outline-clay">
-                <Card className="flex items-center gap-4 transition hover:ring-moss">
+              <Card className="flex flex-col gap-3">
+                <Link to={paths.project(p.id)} className="-m-2 flex min-h-tap items-center gap-4 rounded-soft p-2 hover:bg-wool/40 focus-visible:outline-clay dark:hover:bg-white/5">
                   <div className="flex-1">
                     <p className="text-lg font-bold">{p.title}</p>
                     <p className="text-sm text-ink/70 dark:text-oat/70">
@@ -41,8 +42,9 @@ export default function OnTheHookRoute() {
                     </p>
                   </div>
                   <ChevronRight aria-hidden className="h-6 w-6 text-moss" />
-                </Card>
-              </Link>
+                </Link>
+                {p.pieceCount ? <ResumeLine projectId={p.id} /> : null}
+              </Card>
             </li>
           ))}
         </ul>
