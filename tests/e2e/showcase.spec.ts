@@ -2,8 +2,9 @@ import { expect, test } from '@playwright/test';
 import { Jimp } from 'jimp';
 import { createMember, signIn } from './helpers';
 
-// A maker shares a finished piece by link; a friend opens it signed out, sees the photo and the credit,
-// signs in from the page and leaves a comment. The project is the test's own, so the demo stays as it was.
+// A maker shares a finished piece by link; a friend opens it signed out, sees the photo and the credit; the maker
+// makes a new link, which retires the old page and its photo URLs; the friend opens the new one, signs in from
+// the page and leaves a comment. The project is the test's own, so the demo stays as it was.
 
 async function photoJpeg() {
   const img = new Jimp({ width: 800, height: 600, color: 0xe4d9c6ff });
@@ -60,14 +61,48 @@ test('share a finished piece by link, open it signed out, then comment as a frie
   expect(text).not.toContain('PRIVATE: this one is just for me.');
   expect(text).not.toContain('my cousin Vera');
   expect(text).not.toMatch(/@example\.com/);
+  // The page's photos go through this link, not the owner's own photo URL, which a visitor cannot load.
+  const oldPhotoUrl = (await cover.getAttribute('src'))!;
+  expect(oldPhotoUrl).toMatch(new RegExp(`^/media/shared/${link.split('/p/')[1]}/[A-Za-z0-9_-]{24}/display\\.jpg$`));
+  expect((await friend.request.get(photo.url)).status()).toBe(404);
   // The link preview meta came from the server.
   expect(await friend.locator('meta[property="og:title"]').getAttribute('content')).toBe(title);
-  expect(await friend.locator('meta[property="og:image"]').getAttribute('content')).toMatch(new RegExp(`^https?://[^/]+${photo.url}$`));
+  expect(await friend.locator('meta[property="og:image"]').getAttribute('content')).toBe(new URL(oldPhotoUrl, link).toString());
 
   // Tap to enlarge the cover.
   await cover.click();
   await expect(friend.getByText('Photo 1 of 1')).toBeVisible();
   await friend.getByRole('button', { name: 'Close the photos' }).click();
+
+  // The maker makes a new link: for the friend, still signed out, the old page and a photo URL saved from it
+  // both stop working at once, even with the photo in the browser's cache.
+  expect((await friend.request.get(oldPhotoUrl)).status()).toBe(200);
+  await page.getByRole('button', { name: 'Make a new link' }).click();
+  await page.getByRole('dialog').getByRole('button', { name: 'Make a new link' }).click();
+  await expect(page.getByText('New link made. The old one no longer works.')).toBeVisible();
+  await expect(linkBox).not.toHaveValue(link);
+  const newLink = await linkBox.inputValue();
+  expect(newLink).toMatch(/\/p\/[A-Za-z0-9_-]{22,}$/);
+  const retired = await friend.goto(link);
+  expect(retired?.status()).toBe(404);
+  await expect(friend.getByText('This page is not shared')).toBeVisible();
+  expect((await friend.request.get(oldPhotoUrl)).status()).toBe(404);
+  const oldPhotoLoads = await friend.evaluate(
+    (src) => new Promise<boolean>((resolve) => {
+      const img = new Image();
+      img.onload = () => resolve(img.naturalWidth > 0);
+      img.onerror = () => resolve(false);
+      img.src = src;
+    }),
+    oldPhotoUrl,
+  );
+  expect(oldPhotoLoads).toBe(false);
+
+  // The new link shows the page and its photo again, under a new photo URL.
+  expect((await friend.goto(newLink))?.status()).toBe(200);
+  await expect(cover).toBeVisible();
+  await expect.poll(() => cover.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBeGreaterThan(0);
+  expect(await cover.getAttribute('src')).not.toBe(oldPhotoUrl);
 
   // Sign in from the page as a friend and come straight back.
   const member = createMember('Fennel Friend');
@@ -75,7 +110,7 @@ test('share a finished piece by link, open it signed out, then comment as a frie
   await friend.getByLabel('E-mail').fill(member.email);
   await friend.getByLabel('Password', { exact: true }).fill(member.password);
   await friend.getByRole('button', { name: 'Sign in' }).click();
-  await expect(friend).toHaveURL(link);
+  await expect(friend).toHaveURL(newLink);
   const comment = `What a lovely owl! <b>not bold</b> ${Date.now()}`;
   await friend.getByLabel('Leave a comment').fill(comment);
   await friend.getByRole('button', { name: 'Post comment' }).click();
@@ -87,7 +122,7 @@ test('share a finished piece by link, open it signed out, then comment as a frie
   // The maker makes it private again: the link stops working at once.
   await page.getByRole('radio', { name: /Private/ }).check();
   await expect(linkBox).toHaveCount(0);
-  const closed = await friend.goto(link);
+  const closed = await friend.goto(newLink);
   expect(closed?.status()).toBe(404);
   await expect(friend.getByText('This page is not shared')).toBeVisible();
   await friendContext.close();
