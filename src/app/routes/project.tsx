@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { useQueryClient } from '@tanstack/react-query';
-import { ArrowLeft, BookOpen, Calendar, Gift, Pencil, Trash2 } from 'lucide-react';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { ArrowDown, ArrowLeft, ArrowUp, ArrowUpDown, BookOpen, Calendar, Check, Gift, Pencil, Plus, Trash2 } from 'lucide-react';
 import { toast } from 'sonner';
 import { Banner } from '@/components/ui/banner';
 import { Button, ButtonLink } from '@/components/ui/button';
@@ -19,13 +19,20 @@ import { useDeleteProject } from '@/features/projects/api/delete-project';
 import { Cautions } from '@/features/projects/components/cautions';
 import { MaterialsSection } from '@/features/projects/components/materials-section';
 import { PieceCard } from '@/features/projects/components/piece-card';
+import { PieceEditor } from '@/features/projects/components/piece-editor';
+import { RemovePieceDialog } from '@/features/projects/components/remove-piece-dialog';
+import { piecesMoved, piecesWith, piecesWithout, sentIndex } from '@/features/projects/lib/pieces-patch';
+import { RoundTable } from '@/features/patterns/components/round-table';
+import { entriesQueryOptions } from '@/features/journal/api/get-entries';
+import { journalKeys } from '@/features/journal/api/keys';
+import { tallyKeys } from '@/features/tally/api/keys';
 import { ProjectDetailsForm } from '@/features/projects/components/project-details-form';
 import { projectStatuses, StatusBadge } from '@/features/projects/components/status';
 import { useYarns } from '@/features/yarns/api/get-yarns';
 import { JournalTimeline } from '@/features/journal/components/journal-timeline';
 import { SharePanel } from '@/features/showcase/components/share-panel';
 import { yarnKeys } from '@/features/yarns/api/keys';
-import type { Project } from '@/types/api';
+import type { Project, ProjectPiece } from '@/types/api';
 
 function formatDay(iso: string) {
   const d = new Date(`${iso}T12:00:00`);
@@ -50,6 +57,14 @@ export default function ProjectRoute() {
   const navigate = useNavigate();
   const [editing, setEditing] = useState(false);
   const [confirming, setConfirming] = useState(false);
+  // One piece form at a time (the unsaved-changes guard watches one form per screen).
+  const [editingPiece, setEditingPiece] = useState<number | 'new' | null>(null);
+  const [removingPiece, setRemovingPiece] = useState<ProjectPiece | null>(null);
+  const [ordering, setOrdering] = useState(false);
+  const savePieces = useUpdateProject(id, { silent: true });
+  const movePiece = useUpdateProject(id);
+  // The same list the journal below shows, to say how many entries a removed piece is linked from.
+  const journal = useQuery({ ...entriesQueryOptions(id), enabled: project.isSuccess && !deleted });
 
   if (project.isPending) return <Loading label="Opening the project…" />;
   const missing = project.isError && project.error instanceof ApiError && (project.error.status === 404 || project.error.status === 422);
@@ -69,6 +84,36 @@ export default function ProjectRoute() {
   const p = project.data;
   // The piece being worked: the first one not yet done.
   const current = p.pieces.find((pc) => pc.totals.rounds > 0 && pc.totals.copiesDone < pc.copies);
+
+  const piecesSaved = (pieceIds: number[]) => {
+    // Entries show the piece's name, and the Tally's count of an edited piece may have moved.
+    void qc.invalidateQueries({ queryKey: journalKeys.project(id) });
+    for (const pieceId of pieceIds) void qc.invalidateQueries({ queryKey: tallyKeys.piece(pieceId) });
+  };
+  const editorFor = (piece?: ProjectPiece) => (
+    <PieceEditor
+      piece={piece}
+      terms={p.terms}
+      yarnNames={p.materials.yarns.map((y) => y.name)}
+      RoundTable={RoundTable}
+      sentAt={sentIndex(p.pieces, piece?.id)}
+      saving={savePieces.isPending}
+      saveError={savePieces.error}
+      onCancel={() => {
+        savePieces.reset();
+        setEditingPiece(null);
+      }}
+      onRemove={piece ? () => setRemovingPiece(piece) : undefined}
+      onSave={(values) =>
+        savePieces.mutateAsync({ pieces: piecesWith(p.pieces, values) }).then((saved) => {
+          setEditingPiece(null);
+          piecesSaved(piece ? [piece.id] : []);
+          toast.success(piece ? `Saved ${values.name}.` : `Added ${values.name}.`);
+          return saved;
+        })
+      }
+    />
+  );
 
   const setStatus = (status: ProjectStatus) => update.mutate({ status }, { onSuccess: () => toast.success(`Marked as ${projectStatusLabels[status].toLowerCase()}.`) });
 
@@ -126,21 +171,97 @@ export default function ProjectRoute() {
       </SelectField>
 
       <section aria-labelledby="pieces-heading" className="flex flex-col gap-3">
-        <h2 id="pieces-heading" className="text-xl font-bold">
-          Pieces
-        </h2>
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h2 id="pieces-heading" className="text-xl font-bold">
+            Pieces
+          </h2>
+          {p.pieces.length > 1 && editingPiece === null ? (
+            <Button variant="quiet" aria-pressed={ordering} onClick={() => setOrdering((v) => !v)}>
+              {ordering ? <Check aria-hidden className="h-5 w-5" /> : <ArrowUpDown aria-hidden className="h-5 w-5" />}
+              {ordering ? 'Done ordering' : 'Change order'}
+            </Button>
+          ) : null}
+        </div>
         {p.pieces.length ? (
           <ul className="grid gap-4 md:grid-cols-2">
-            {p.pieces.map((piece) => (
-              <li key={piece.id}>
-                <PieceCard projectId={p.id} piece={piece} terms={p.terms} yarnWeight={weightFor(p, piece.yarns)} showShape={piece.id === current?.id} />
+            {p.pieces.map((piece, i) => (
+              <li key={piece.id} className={editingPiece === piece.id ? 'md:col-span-2' : undefined}>
+                {editingPiece === piece.id ? (
+                  editorFor(piece)
+                ) : (
+                  <PieceCard
+                    projectId={p.id}
+                    piece={piece}
+                    terms={p.terms}
+                    yarnWeight={weightFor(p, piece.yarns)}
+                    showShape={piece.id === current?.id}
+                    actions={
+                      ordering ? (
+                        <>
+                          <Button
+                            variant="secondary"
+                            aria-label={`Move ${piece.name} earlier`}
+                            disabled={i === 0 || movePiece.isPending}
+                            onClick={() => movePiece.mutate({ pieces: piecesMoved(p.pieces, piece.id, -1) })}
+                            className="px-3"
+                          >
+                            <ArrowUp aria-hidden className="h-5 w-5" />
+                          </Button>
+                          <Button
+                            variant="secondary"
+                            aria-label={`Move ${piece.name} later`}
+                            disabled={i === p.pieces.length - 1 || movePiece.isPending}
+                            onClick={() => movePiece.mutate({ pieces: piecesMoved(p.pieces, piece.id, 1) })}
+                            className="px-3"
+                          >
+                            <ArrowDown aria-hidden className="h-5 w-5" />
+                          </Button>
+                        </>
+                      ) : editingPiece === null ? (
+                        <Button variant="quiet" aria-label={`Edit ${piece.name}`} onClick={() => setEditingPiece(piece.id)} className="px-3">
+                          <Pencil aria-hidden className="h-4 w-4" /> Edit
+                        </Button>
+                      ) : null
+                    }
+                  />
+                )}
               </li>
             ))}
           </ul>
-        ) : (
+        ) : editingPiece !== 'new' ? (
           <p className="text-ink/70 dark:text-oat/70">This project has no pieces yet.</p>
-        )}
+        ) : null}
+        {editingPiece === 'new' ? (
+          editorFor()
+        ) : editingPiece === null && !ordering ? (
+          <Button variant="secondary" className="self-start" onClick={() => setEditingPiece('new')}>
+            <Plus aria-hidden className="h-5 w-5" /> Add a piece
+          </Button>
+        ) : null}
       </section>
+      <RemovePieceDialog
+        piece={removingPiece}
+        fromPattern={p.patternCredit != null}
+        journalEntries={journal.data ? journal.data.filter((e) => e.pieceId === removingPiece?.id).length : null}
+        pending={savePieces.isPending}
+        onCancel={() => setRemovingPiece(null)}
+        onConfirm={() => {
+          const gone = removingPiece!;
+          savePieces.mutate(
+            { pieces: piecesWithout(p.pieces, gone.id) },
+            {
+              onSuccess: () => {
+                setRemovingPiece(null);
+                setEditingPiece(null);
+                piecesSaved([]);
+                toast.success(`Removed ${gone.name}.`);
+              },
+              // The piece form (still open behind the dialog) shows why.
+              onError: () => setRemovingPiece(null),
+            },
+          );
+        }}
+      />
 
       <Card className="p-4 sm:p-5">
         <MaterialsSection

@@ -1,8 +1,8 @@
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useBlocker } from 'react-router-dom';
 import { CheckCircle2, Globe, Lock, Save, Users } from 'lucide-react';
+import { useLeaveGuard } from '@/hooks/use-leave-guard';
 import { cautionsFor } from '@/reference/safety';
 import {
   CreatePatternSchema,
@@ -15,7 +15,6 @@ import { ApiError } from '@/lib/api-client';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
-import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { cn } from '@/utils/cn';
 import { GaugeFields } from './gauge-fields';
@@ -115,20 +114,8 @@ export function PatternEditor({
   });
   const { register, formState, handleSubmit, reset } = form;
   const { errors, isDirty } = formState;
-  const leaving = useRef(false);
   const [justSaved, setJustSaved] = useState(false);
-
-  // Ask before leaving with unsaved changes: in-app navigation through the router, closing the tab through the browser.
-  const blocker = useBlocker(
-    ({ currentLocation, nextLocation }) =>
-      isDirty && !leaving.current && currentLocation.pathname !== nextLocation.pathname,
-  );
-  useEffect(() => {
-    if (!isDirty) return;
-    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
-    window.addEventListener('beforeunload', warn);
-    return () => window.removeEventListener('beforeunload', warn);
-  }, [isDirty]);
+  const { leaving, dialog: leaveDialog } = useLeaveGuard(isDirty, 'Your changes to this pattern are not saved yet.');
 
   const submit = handleSubmit(async (values) => {
     try {
@@ -274,15 +261,7 @@ export function PatternEditor({
         </div>
       </form>
 
-      <ConfirmDialog
-        open={blocker.state === 'blocked'}
-        title="Leave without saving?"
-        confirmLabel="Leave and lose changes"
-        onConfirm={() => blocker.proceed?.()}
-        onCancel={() => blocker.reset?.()}
-      >
-        <p>Your changes to this pattern are not saved yet.</p>
-      </ConfirmDialog>
+      {leaveDialog}
     </FormProvider>
   );
 }

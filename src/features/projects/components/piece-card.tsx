@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, type ReactNode } from 'react';
 import { ChevronDown, Diamond, Hash } from 'lucide-react';
 import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -37,6 +37,7 @@ export function PieceCard({
   terms,
   yarnWeight,
   showShape = false,
+  actions,
 }: {
   projectId: number;
   piece: ProjectPiece;
@@ -44,6 +45,8 @@ export function PieceCard({
   yarnWeight?: number | null;
   /** Open the silhouette from the start (the piece being worked); the others stay folded to keep the page short. */
   showShape?: boolean;
+  /** Buttons beside the name (edit, move), from the screen. */
+  actions?: ReactNode;
 }) {
   const check = useMemo(() => checkPiece(piece.instructions, { terms }), [piece.instructions, terms]);
   const marks = useMemo<SilhouetteMark[]>(() => {
@@ -83,6 +86,7 @@ export function PieceCard({
             {piece.yarns.length ? ` · ${piece.yarns.join(', ')}` : ''}
           </p>
         </div>
+        {actions ? <div className="-mr-2 -mt-1 flex flex-wrap gap-1">{actions}</div> : null}
       </div>
 
       <div>
