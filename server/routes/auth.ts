@@ -3,12 +3,14 @@ import type { AppContext } from '../context.js';
 import { validate } from '../middleware/validate.js';
 import { currentUser, requireUser } from '../middleware/require-user.js';
 import {
+  DeleteAccountSchema,
   PasswordChangeSchema,
   PasswordResetConfirmSchema,
   PasswordResetRequestSchema,
   SignInSchema,
   SignUpSchema,
   VerifyEmailSchema,
+  type DeleteAccountInput,
   type PasswordChangeInput,
   type PasswordResetConfirmInput,
   type PasswordResetRequestInput,
@@ -21,6 +23,7 @@ import {
   RESET_REQUESTED,
   changePassword,
   confirmPasswordReset,
+  deleteAccount,
   requestPasswordReset,
   resendVerification,
   signUp,
@@ -95,6 +98,13 @@ export function authRouter(ctx: AppContext) {
   router.post('/auth/password', requireUser, limit.passwordChangeAccount, validate({ body: PasswordChangeSchema }), async (req, res) => {
     await changePassword(ctx, currentUser(res).id, res.locals.session!.id, req.body as PasswordChangeInput, publicOrigin(ctx.env, req));
     res.json({ ok: true, message: 'Your password is changed. Other devices were signed out; this one stays signed in.' });
+  });
+
+  // The password is asked again (and rate limited like a password change); the session cookie goes with the account.
+  router.delete('/auth/account', requireUser, limit.passwordChangeAccount, validate({ body: DeleteAccountSchema }), async (req, res) => {
+    await deleteAccount(ctx, currentUser(res).id, req.body as DeleteAccountInput, publicOrigin(ctx.env, req));
+    res.append('Set-Cookie', ctx.lucia.createBlankSessionCookie().serialize());
+    res.json({ ok: true, message: 'Your account and everything in it are deleted.' });
   });
 
   return router;

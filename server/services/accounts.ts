@@ -6,7 +6,8 @@ import { renderMail, tokenLink } from '../lib/mail-template.js';
 import type { MailMessage } from '../lib/mail.js';
 import { hashPassword, verifyPassword } from '../lib/password.js';
 import { createUser, findUserByEmail, type UserRow } from './users.js';
-import type { PasswordChangeInput, SignUpInput } from '../../src/schemas/auth.js';
+import type { DeleteAccountInput, PasswordChangeInput, SignUpInput } from '../../src/schemas/auth.js';
+import { deleteProjectPhotoFiles } from '../lib/storage.js';
 
 // Guidance followed here: OWASP Authentication Cheat Sheet and Forgot Password Cheat Sheet (random single-use
 // tokens stored hashed, short expiry, the same answer whether or not an account exists, no automatic sign-in
@@ -227,4 +228,45 @@ export async function changePassword(ctx: AppContext, userId: string, keepSessio
     await trx('auth_tokens').where({ user_id: user.id, purpose: 'reset_password' }).whereNull('used_at').update({ used_at: Date.now() });
   });
   void deliver(ctx, passwordChangedMail(user, origin));
+}
+
+function accountDeletedMail(user: Pick<UserRow, 'email' | 'display_name'>, origin: string): MailMessage {
+  return {
+    to: user.email,
+    subject: 'Your Whorlbook account is deleted',
+    ...renderMail({
+      greeting: `Hello ${user.display_name},`,
+      paragraphs: [
+        `Your Whorlbook account was deleted (${new Date().toUTCString()}), with its patterns, projects, counts, journal, photos, comments and shared pages.`,
+        'If you did not ask for this, someone had your password: reply to this message. You are welcome to sign up again at any time.',
+      ],
+      action: { label: 'Open Whorlbook', url: new URL('/', origin).toString() },
+    }),
+  };
+}
+
+/**
+ * Deletes the signed-in member and everything that is theirs. The rows go in one transaction (every table that
+ * names a member cascades from `users`), then the photo files of their projects. The last admin cannot leave,
+ * or nobody could look after the members.
+ */
+export async function deleteAccount(ctx: AppContext, userId: string, input: DeleteAccountInput, origin: string) {
+  const user = await ctx.db<UserRow>('users').where({ id: userId }).first();
+  if (!user) throw new HttpError(401, 'Please sign in to continue.');
+  if (!(await verifyPassword(user.password_hash, input.password))) {
+    throw new HttpError(403, 'That is not your password.', [{ path: 'password', message: 'That is not your password.' }]);
+  }
+  const projectIds = await ctx.db.transaction(async (trx) => {
+    if (user.role === 'admin') {
+      const others = await trx('users').where({ role: 'admin' }).whereNull('disabled_at').whereNot({ id: user.id }).count<{ n: number }[]>({ n: '*' });
+      if (!Number(others[0]?.n)) {
+        throw new HttpError(409, 'You are the only admin. Make another member an admin before deleting your account.');
+      }
+    }
+    const ids: number[] = (await trx('projects').where({ owner_id: user.id }).select('id')).map((r: { id: number }) => r.id);
+    await trx('users').where({ id: user.id }).delete();
+    return ids;
+  });
+  for (const id of projectIds) await deleteProjectPhotoFiles(ctx, id);
+  void deliver(ctx, accountDeletedMail(user, origin));
 }

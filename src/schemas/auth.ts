@@ -78,6 +78,12 @@ export const PasswordChangeSchema = z
   .refine((v) => v.current !== v.next, { path: ['next'], message: 'Choose a new password that differs from the current one.' });
 export type PasswordChangeInput = z.infer<typeof PasswordChangeSchema>;
 
+// Deleting one's own account asks for the password again, so an unattended signed-in phone cannot do it.
+export const DeleteAccountSchema = z.object({
+  password: z.string().min(1, { message: 'Enter your password to confirm.' }).max(256),
+});
+export type DeleteAccountInput = z.infer<typeof DeleteAccountSchema>;
+
 // The admin member list: ?query=&page=&sort= (sort is a column name, "-" in front for descending).
 export const AdminUserSortSchema = z.enum(['name', '-name', 'email', '-email', 'projects', '-projects', 'lastSignIn', '-lastSignIn', 'created', '-created']);
 export type AdminUserSort = z.infer<typeof AdminUserSortSchema>;

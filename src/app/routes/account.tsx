@@ -5,6 +5,7 @@ import { Loading, PageHeader } from '@/components/ui/page';
 import { useMe } from '@/features/auth/api/get-me';
 import { useResendVerification } from '@/features/auth/api/resend-verification';
 import { ChangePasswordForm } from '@/features/auth/components/change-password-form';
+import { DeleteAccountForm } from '@/features/auth/components/delete-account-form';
 
 function EmailStatus({ verified }: { verified: boolean }) {
   const resend = useResendVerification();
@@ -70,6 +71,10 @@ export default function AccountRoute() {
         <Card>
           <h2 className="mb-3 text-xl font-bold">Change your password</h2>
           <ChangePasswordForm />
+        </Card>
+        <Card className="lg:col-span-2">
+          <h2 className="mb-3 text-xl font-bold">Delete your account</h2>
+          <DeleteAccountForm />
         </Card>
       </div>
     </>
