@@ -247,15 +247,19 @@ export function PieceEditor({
           </Banner>
         ) : null}
 
+        {/* Only the save sticks to the screen while there is something to save; the other actions wait at the end. */}
         <div
           className={cn(
-            'z-10 flex flex-wrap items-center gap-3 rounded-blob p-2',
+            'z-10 flex flex-wrap items-center gap-x-4 gap-y-1 rounded-blob p-2',
             isDirty && 'sticky bottom-24 bg-oat/95 shadow-lg ring-1 ring-wool backdrop-blur sm:bottom-4 dark:bg-ink/95 dark:ring-[#4a423c]',
           )}
         >
-          <Button type="submit" pending={saving}>
+          <Button type="submit" pending={saving} className="w-full sm:w-auto">
             <Save aria-hidden className="h-5 w-5" /> {piece ? (moves ? 'Save and move the count' : 'Save the piece') : 'Add the piece'}
           </Button>
+          {isDirty ? <p className="hidden px-2 text-sm font-semibold sm:block">Unsaved changes</p> : null}
+        </div>
+        <div className="flex flex-wrap items-center gap-3 border-t border-wool pt-3 dark:border-[#4a423c]">
           <Button variant="secondary" onClick={() => (isDirty ? setDropping(true) : onCancel())}>
             Cancel
           </Button>
