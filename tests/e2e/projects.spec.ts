@@ -96,3 +96,48 @@ test('a yarn picked from the shelf for a project counts off what is left', async
   await expect(shelfCard(page, yarn)).toHaveCount(0);
   expect((await page.request.delete(`/api/projects/${project.id}`)).status()).toBe(204);
 });
+
+test('on a phone, a maker edits a counted piece: the round table checks as they type, the count moves with its round', async ({ page }) => {
+  const consoleErrors: string[] = [];
+  page.on('console', (m) => m.type() === 'error' && !/status of 401/.test(m.text()) && consoleErrors.push(m.text()));
+  await signIn(page);
+  // A project of our own with one piece, counted into its third round through the Tally's API.
+  const created = await page.request.post('/api/projects', {
+    data: { title: `Bobble edit ${Date.now()}`, pieces: [{ name: 'Bobble', instructions: 'Rnd 1: 6 sc in MR (6)\nRnd 2: inc x6 (12)\nRnd 3: (sc, inc) x6 (18)' }] },
+  });
+  expect(created.status()).toBe(201);
+  const { project } = await created.json();
+  const pieceId = project.pieces[0].id;
+  const set = await page.request.post(`/api/pieces/${pieceId}/progress`, { data: { opId: `e2e-${Date.now()}-edit`, action: 'set', to: { copy: 1, round: 2, step: 0 } } });
+  expect(set.status()).toBe(200);
+
+  await page.goto(`/projects/${project.id}`);
+  await expect(page.getByText('Rnd 3 of 3')).toBeVisible();
+  await page.getByRole('button', { name: 'Edit Bobble' }).click();
+  const form = page.getByRole('form', { name: 'Edit Bobble' });
+  const text = form.getByRole('textbox', { name: /Instructions/ });
+  // A plain round added after Rnd 1, with a slip in its stated count, and a new last round.
+  const edited = ['Rnd 1: 6 sc in MR (6)', 'Rnd 2: sc around (7)', 'Rnd 3: inc x6 (12)', 'Rnd 4: (sc, inc) x6 (18)', 'Rnd 5: (2 sc, inc) x6 (24)'].join('\n');
+  await text.fill(edited);
+  const table = form.getByRole('region', { name: 'Round table' });
+  await expect(table.getByText('Round 2 makes 6 stitches, not 7')).toBeVisible();
+  await expect(table.getByText('1 to check')).toBeVisible();
+  await text.fill(edited.replace('(7)', '(6)'));
+  await expect(table.getByText('Every count adds up')).toBeVisible();
+  await expect(form.getByText('5 rounds to count')).toBeVisible();
+  // The count was on Rnd 3; that round is Rnd 4 now, and the new Rnd 2 counts as worked. Said before saving.
+  const warning = form.getByRole('alert').filter({ hasText: 'What this does to your Tally count' });
+  await expect(warning).toContainText('Rnd 2 is new and comes before your place');
+  await expect(warning).toContainText('after saving it stands at the start of Rnd 4');
+
+  await form.getByRole('button', { name: 'Save and move the count' }).click();
+  await expect(form).toHaveCount(0);
+  await expect(page.getByText('Rnd 4 of 5')).toBeVisible();
+  await page.reload();
+  await expect(page.getByText('Rnd 4 of 5')).toBeVisible();
+  const progress = await (await page.request.get(`/api/pieces/${pieceId}/progress`)).json();
+  expect(progress.progress).toMatchObject({ copy: 1, round: 3, step: 0 });
+
+  expect((await page.request.delete(`/api/projects/${project.id}`)).status()).toBe(204);
+  expect(consoleErrors).toEqual([]);
+});
