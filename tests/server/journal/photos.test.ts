@@ -301,6 +301,13 @@ describe('refusing bad files, clearly, with the server still healthy', () => {
   });
 });
 
+/** The photos a visitor of the project's shared page gets, through the page's own link (issue 8). */
+async function sharedPagePhotos(projectId: number): Promise<Array<{ url: string; thumbUrl: string; alt: string }>> {
+  const { share_token: token } = await t.db('projects').where({ id: projectId }).first('share_token');
+  const res = await request(t.app).get(`/api/share/${token}`);
+  return res.status === 200 ? res.body.showcase.photos : [];
+}
+
 describe('who can see a photo', () => {
   let photo: { id: number; url: string; thumbUrl: string };
   let other: Awaited<ReturnType<typeof signedInAgent>>;
@@ -347,18 +354,26 @@ describe('who can see a photo', () => {
     }
   });
 
-  it('anyone may see it while the project is shared by link or publicly, and no one once it is private again', async () => {
+  it('its own URL serves the owner only, even while the project is shared; visitors get it through the page’s link', async () => {
     await setVisibility(t.db, privateProject.id, 'link');
-    const shared = await fetchImage(photo.url, request(t.app));
-    expect(shared.status).toBe(200);
-    expect(shared.headers['cache-control']).toBe('public, max-age=3600');
-    await setVisibility(t.db, privateProject.id, 'public');
-    expect((await other.agent.get(photo.thumbUrl)).status).toBe(200);
-    await setVisibility(t.db, privateProject.id, 'private');
-    expect((await request(t.app).get(photo.url)).status).toBe(404);
+    try {
+      expect((await request(t.app).get(photo.url)).status).toBe(404);
+      expect((await other.agent.get(photo.thumbUrl)).status).toBe(404);
+      const own = await fetchImage(photo.url);
+      expect(own.status).toBe(200);
+      expect(own.headers['cache-control']).toBe('private, max-age=3600');
+      const [onPage] = await sharedPagePhotos(privateProject.id);
+      const shared = await fetchImage(onPage!.url, request(t.app));
+      expect(shared.status).toBe(200);
+      expect(shared.body).toEqual(own.body);
+      await setVisibility(t.db, privateProject.id, 'private');
+      expect((await request(t.app).get(onPage!.url)).status).toBe(404);
+    } finally {
+      await setVisibility(t.db, privateProject.id, 'private');
+    }
   });
 
-  it('while shared, a photo of an entry not on the showcase stays private unless it is the cover', async () => {
+  it('while shared, a photo of an entry not on the showcase stays private, even as the cover', async () => {
     const diary = await owner.agent
       .post(`/api/projects/${privateProject.id}/entries`)
       .send({ body: 'Frogged the ear twice.', entryDate: '2026-12-01' });
@@ -369,9 +384,11 @@ describe('who can see a photo', () => {
       expect((await request(t.app).get(hidden.url)).status).toBe(404);
       expect((await other.agent.get(hidden.thumbUrl)).status).toBe(404);
       expect((await owner.agent.get(hidden.url)).status).toBe(200);
-      expect((await request(t.app).get(photo.url)).status).toBe(200); // the showcase entry's photo
+      // The page shows the showcase entry's photo, not this one.
+      expect((await sharedPagePhotos(privateProject.id)).map((p) => p.alt)).toEqual(['Secret gift — 1 Dec 2026']);
       await t.db('projects').where({ id: privateProject.id }).update({ cover_photo_id: hidden.id });
-      expect((await request(t.app).get(hidden.url)).status).toBe(200);
+      expect((await sharedPagePhotos(privateProject.id)).map((p) => p.alt)).toEqual(['Secret gift — 1 Dec 2026']);
+      expect((await request(t.app).get(hidden.url)).status).toBe(404);
     } finally {
       await t.db('projects').where({ id: privateProject.id }).update({ cover_photo_id: null });
       await setVisibility(t.db, privateProject.id, 'private');
@@ -380,10 +397,11 @@ describe('who can see a photo', () => {
 
   it('a shared project whose showcase an admin took down serves its photos to the owner only, privately cached', async () => {
     await setVisibility(t.db, privateProject.id, 'link');
-    expect((await request(t.app).get(photo.url)).status).toBe(200);
+    const [onPage] = await sharedPagePhotos(privateProject.id);
+    expect((await request(t.app).get(onPage!.url)).status).toBe(200);
     await t.db('projects').where({ id: privateProject.id }).update({ showcase_hidden_at: new Date().toISOString(), showcase_hidden_by: other.user.id });
     try {
-      for (const url of [photo.url, photo.thumbUrl]) {
+      for (const url of [photo.url, photo.thumbUrl, onPage!.url, onPage!.thumbUrl]) {
         expect((await request(t.app).get(url)).status).toBe(404);
         expect((await other.agent.get(url)).status).toBe(404);
       }
@@ -404,13 +422,14 @@ describe('who can see a photo', () => {
     const up = await upload([{ data: await makeJpeg({ width: 80, height: 60 }), name: 'done.jpg' }], maker.agent, entry.body.entry.id);
     expect(up.status).toBe(201);
     const p = up.body.photos[0];
-    expect((await request(t.app).get(p.url)).status).toBe(200);
+    const [onPage] = await sharedPagePhotos(shared.id);
+    expect((await request(t.app).get(onPage!.url)).status).toBe(200);
     const row = await t.db('photos').where({ id: p.id }).first();
     expect(await canViewPhoto(t.db, { id: maker.user.id }, row)).toBe(true);
 
     const admin = await signedInAgent(t.app, t.db, { role: 'admin' });
     expect((await admin.agent.post(`/api/admin/users/${maker.user.id}/disable`)).status).toBe(200);
-    for (const url of [p.url, p.thumbUrl]) {
+    for (const url of [p.url, p.thumbUrl, onPage!.url]) {
       expect((await request(t.app).get(url)).status).toBe(404);
       expect((await other.agent.get(url)).status).toBe(404);
       expect((await maker.agent.get(url)).status).toBe(404);
@@ -421,7 +440,7 @@ describe('who can see a photo', () => {
 
     // And it is the account's state that decides: opened again, the public photo is public again.
     expect((await admin.agent.post(`/api/admin/users/${maker.user.id}/enable`)).status).toBe(200);
-    expect((await request(t.app).get(p.url)).status).toBe(200);
+    expect((await request(t.app).get(onPage!.url)).status).toBe(200);
   });
 
   it('another member cannot add photos to, or change, someone else’s entry and photo', async () => {
