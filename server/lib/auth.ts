@@ -1,4 +1,5 @@
 import { Lucia, type Adapter, type DatabaseSession, type DatabaseUser } from 'lucia';
+import type Database from 'better-sqlite3';
 import type { Knex } from 'knex';
 
 export type Role = 'member' | 'admin';
@@ -10,6 +11,20 @@ interface UserRow {
   role: Role;
   email_verified_at: string | null;
   disabled_at: string | null;
+}
+
+type SessionUserRow = UserRow & { session_id: string; user_id: string; expires_at: number };
+const sessionStatements = new WeakMap<Database.Database, Database.Statement<[string], SessionUserRow>>();
+function sessionStatement(conn: Database.Database) {
+  let st = sessionStatements.get(conn);
+  if (!st) {
+    st = conn.prepare(
+      'select s.id as session_id, s.user_id, s.expires_at, u.id, u.email, u.display_name, u.role, u.email_verified_at, u.disabled_at ' +
+        'from sessions s join users u on u.id = s.user_id where s.id = ?',
+    );
+    sessionStatements.set(conn, st);
+  }
+  return st;
 }
 
 // Lucia's published SQLite adapter refuses better-sqlite3 12, so this is our own small one over Knex.
@@ -32,12 +47,21 @@ export function knexAdapter(db: Knex): Adapter {
     },
   });
   return {
+    // Runs on every signed-in request (every Tally tap among them), so it is one prepared statement over the
+    // pool's connection rather than a query built per table.
     async getSessionAndUser(sessionId) {
-      const session = await db('sessions').where({ id: sessionId }).first();
-      if (!session) return [null, null];
-      const user = await db<UserRow>('users').where({ id: session.user_id }).first();
-      if (!user) return [null, null];
-      return [toSession(session), toUser(user)];
+      const conn = (await db.client.acquireConnection()) as Database.Database;
+      let row: SessionUserRow | undefined;
+      try {
+        row = sessionStatement(conn).get(sessionId);
+      } finally {
+        await db.client.releaseConnection(conn);
+      }
+      if (!row) return [null, null];
+      return [
+        toSession({ id: row.session_id, user_id: row.user_id, expires_at: row.expires_at }),
+        toUser(row),
+      ];
     },
     async getUserSessions(userId) {
       const rows = await db('sessions').where({ user_id: userId });

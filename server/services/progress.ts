@@ -73,7 +73,11 @@ export function shapeForInstructions(instructions: string, copies: number, terms
   } else {
     const check = checkPiece(instructions, { terms });
     const { stepsPerRound } = shapeOf(check.rounds, 1);
-    cached = { stepsPerRound, roundNumbers: check.rounds.map((r) => r.number), roundKinds: check.rounds.map((r) => r.kind) };
+    cached = {
+      stepsPerRound,
+      roundNumbers: check.rounds.map((r) => r.number),
+      roundKinds: check.rounds.map((r) => r.kind),
+    };
     shapeCache.set(key, cached);
     if (shapeCache.size > SHAPE_CACHE_LIMIT) shapeCache.delete(shapeCache.keys().next().value!);
   }
@@ -85,9 +89,14 @@ async function tallyPiece(db: Knex, userId: string, pieceId: number) {
   const piece = (await db('project_pieces as pp')
     .join('projects as p', 'p.id', 'pp.project_id')
     .where({ 'pp.id': pieceId, 'p.owner_id': userId })
-    .first('pp.id', 'pp.project_id', 'pp.copies', 'pp.instructions', 'p.terms')) as (PieceRow & { terms: string }) | undefined;
+    .first('pp.id', 'pp.project_id', 'pp.copies', 'pp.instructions', 'p.terms')) as
+    (PieceRow & { terms: string }) | undefined;
   if (!piece) throw notFound('That piece');
-  const shape = shapeForInstructions(piece.instructions ?? '', piece.copies, piece.terms === 'uk' ? 'uk' : 'us');
+  const shape = shapeForInstructions(
+    piece.instructions ?? '',
+    piece.copies,
+    piece.terms === 'uk' ? 'uk' : 'us',
+  );
   return { piece, shape };
 }
 
@@ -98,13 +107,24 @@ const roundName = (shape: TallyShape) => (index: number) => {
 
 function toOut(row: ProgressRow | undefined): ProgressOut {
   if (!row) return { ...startPosition, done: 0, version: 0, updatedAt: null };
-  return { copy: row.copy, round: row.round, step: row.step, done: row.done, version: row.version, updatedAt: row.updated_at };
+  return {
+    copy: row.copy,
+    round: row.round,
+    step: row.step,
+    done: row.done,
+    version: row.version,
+    updatedAt: row.updated_at,
+  };
 }
 
-const readRow = (db: Knex, pieceId: number) => db<ProgressRow>('piece_progress').where({ piece_id: pieceId }).first();
+const readRow = (db: Knex, pieceId: number) =>
+  db<ProgressRow>('piece_progress').where({ piece_id: pieceId }).first();
 
 /** Totals the project page and the Tally agree on, from the same shape the server counts with. */
-export function tallyTotals(shape: PieceShape, progress: Pick<ProgressOut, 'copy' | 'round' | 'step' | 'done'>) {
+export function tallyTotals(
+  shape: PieceShape,
+  progress: Pick<ProgressOut, 'copy' | 'round' | 'step' | 'done'>,
+) {
   const perCopy = stepsPerCopy(shape);
   const finished = isFinished(shape, progress);
   return {
@@ -123,18 +143,24 @@ export async function getProgress(db: Knex, userId: string, pieceId: number): Pr
 const END_OF_PIECE =
   'This piece is already counted to its last stitch of its last copy. Undo, or jump to a round, to count again.';
 
-// The tap is the app's hottest write, so it runs as one synchronous better-sqlite3 transaction on the pool's only
-// connection (BEGIN IMMEDIATE … COMMIT with nothing else in between) with prepared statements, instead of a Knex
-// transaction's round of awaits per statement. Knex still owns the connection: it is borrowed and handed back.
+// The tap is the app's hottest write, so it runs inside one synchronous better-sqlite3 transaction on the pool's
+// only connection (BEGIN IMMEDIATE … COMMIT with nothing else in between) with prepared statements, instead of a
+// Knex transaction's round of awaits per statement. Knex still owns the connection: it is borrowed and handed back.
 interface Statements {
   piece: Database.Statement<[number, string], PieceRow & { terms: string }>;
   seen: Database.Statement<[number, string], { id: number }>;
   row: Database.Statement<[number], ProgressRow>;
   lastLive: Database.Statement<[number], { id: number; before: string }>;
-  insert: Database.Statement<[number, string, string, string, string, string, string | null, number], { id: number }>;
+  insert: Database.Statement<
+    [number, string, string, string, string, string, string | null, number],
+    { id: number }
+  >;
   markUndone: Database.Statement<[number, number]>;
   upsert: Database.Statement<[number, number, number, number, number, number, string]>;
   touchProject: Database.Statement<[string, number]>;
+  /** applyOne as a transaction function: called inside the batch's transaction it runs as a SAVEPOINT
+   * (better-sqlite3 nests them so), so a throw rolls back that tap alone. */
+  applyTap: Database.Transaction<typeof applyOne>;
 }
 const statements = new WeakMap<Database.Database, Statements>();
 function statementsFor(conn: Database.Database): Statements {
@@ -147,8 +173,12 @@ function statementsFor(conn: Database.Database): Statements {
       ),
       seen: conn.prepare('select id from progress_events where piece_id = ? and op_id = ?'),
       row: conn.prepare('select * from piece_progress where piece_id = ?'),
-      lastLive: conn.prepare("select id, before from progress_events where piece_id = ? and action <> 'undo' and undone_by is null order by id desc limit 1"),
-      insert: conn.prepare('insert into progress_events (piece_id, op_id, action, payload, before, after, at, version) values (?, ?, ?, ?, ?, ?, ?, ?) returning id'),
+      lastLive: conn.prepare(
+        "select id, before from progress_events where piece_id = ? and action <> 'undo' and undone_by is null order by id desc limit 1",
+      ),
+      insert: conn.prepare(
+        'insert into progress_events (piece_id, op_id, action, payload, before, after, at, version) values (?, ?, ?, ?, ?, ?, ?, ?) returning id',
+      ),
       markUndone: conn.prepare('update progress_events set undone_by = ? where id = ?'),
       upsert: conn.prepare(
         'insert into piece_progress (piece_id, copy, round, step, done, version, updated_at) values (?, ?, ?, ?, ?, ?, ?) ' +
@@ -156,6 +186,7 @@ function statementsFor(conn: Database.Database): Statements {
       ),
       // "On the hook" lists the project last worked on first.
       touchProject: conn.prepare('update projects set updated_at = ? where id = ?'),
+      applyTap: conn.transaction(applyOne),
     };
     statements.set(conn, s);
   }
@@ -164,67 +195,158 @@ function statementsFor(conn: Database.Database): Statements {
 
 const NO_ROUNDS = 'This piece has no rounds to count yet. Add its instructions on the project page first.';
 
-/** The event and the new position, in one transaction. A repeated opId changes nothing. */
-function applyInTransaction(conn: Database.Database, shape: TallyShape, pieceId: number, projectId: number, op: ProgressOp) {
-  const st = statementsFor(conn);
-  return conn
-    .transaction((): { progress: ProgressOut; applied: boolean } => {
-      const row = st.row.get(pieceId);
-      if (st.seen.get(pieceId, op.opId)) return { progress: toOut(row), applied: false };
-      const before = clampPosition(shape, row ?? startPosition);
-      let after: Position | null;
-      let undone: { id: number; before: string } | undefined;
-      switch (op.action) {
-        case 'step':
-          after = advance(shape, before);
-          if (!after) throw new HttpError(409, shape.stepsPerRound.length ? END_OF_PIECE : NO_ROUNDS);
-          break;
-        case 'round':
-          after = finishRound(shape, before);
-          if (!after) throw new HttpError(409, shape.stepsPerRound.length ? END_OF_PIECE : NO_ROUNDS);
-          break;
-        case 'set': {
-          const problem = targetProblem(shape, op.to!, roundName(shape));
-          if (problem) throw new HttpError(422, problem, [{ path: 'to', message: problem }]);
-          after = normalize(shape, op.to!);
-          break;
+/** One tap's event and new position. A repeated opId changes nothing. Runs inside the batch's transaction. */
+function applyOne(st: Statements, tap: PendingTap): { progress: ProgressOut; applied: boolean } {
+  const { pieceId, op } = tap;
+  // The same owner check as ownedPiece, inside the transaction so it sees what the tap is written against.
+  const piece = st.piece.get(pieceId, tap.userId);
+  if (!piece) throw notFound('That piece');
+  const shape = shapeForInstructions(
+    piece.instructions ?? '',
+    piece.copies,
+    piece.terms === 'uk' ? 'uk' : 'us',
+  );
+  const row = st.row.get(pieceId);
+  if (st.seen.get(pieceId, op.opId)) return { progress: toOut(row), applied: false };
+  const before = clampPosition(shape, row ?? startPosition);
+  let after: Position | null;
+  let undone: { id: number; before: string } | undefined;
+  switch (op.action) {
+    case 'step':
+      after = advance(shape, before);
+      if (!after) throw new HttpError(409, shape.stepsPerRound.length ? END_OF_PIECE : NO_ROUNDS);
+      break;
+    case 'round':
+      after = finishRound(shape, before);
+      if (!after) throw new HttpError(409, shape.stepsPerRound.length ? END_OF_PIECE : NO_ROUNDS);
+      break;
+    case 'set': {
+      const problem = targetProblem(shape, op.to!, roundName(shape));
+      if (problem) throw new HttpError(422, problem, [{ path: 'to', message: problem }]);
+      after = normalize(shape, op.to!);
+      break;
+    }
+    case 'undo':
+      undone = st.lastLive.get(pieceId);
+      if (!undone) throw new HttpError(409, 'There is nothing to undo on this piece yet.');
+      after = clampPosition(shape, JSON.parse(undone.before) as Position);
+      break;
+  }
+  const version = (row?.version ?? 0) + 1;
+  const done = doneAt(shape, after);
+  const payload = JSON.stringify(op.to ? { to: op.to } : {});
+  const { id } = st.insert.get(
+    pieceId,
+    op.opId,
+    op.action,
+    payload,
+    JSON.stringify(before),
+    JSON.stringify(after),
+    op.at ?? null,
+    version,
+  )!;
+  if (undone) st.markUndone.run(id, undone.id);
+  const updatedAt = new Date().toISOString();
+  st.upsert.run(pieceId, after.copy, after.round, after.step, done, version, updatedAt);
+  st.touchProject.run(updatedAt, piece.project_id);
+  return { progress: { ...after, done, version, updatedAt }, applied: true };
+}
+
+// Group commit (D10 in DEVELOPERS.md). With synchronous = FULL every COMMIT waits for an fsync, and
+// better-sqlite3 waits for it on the event loop, so under load the fsync, not the counting, sets the pace. Taps
+// that arrive while one is being written are therefore queued and written together: one BEGIN IMMEDIATE … COMMIT
+// (one fsync) for all of them, each tap inside its own savepoint so a refused tap (409/422/404) is rolled back
+// alone and the others still count. Nobody is answered before the COMMIT that holds their tap has returned, so
+// an acknowledged tap is as durable as before; if the COMMIT fails, every tap in it fails and none is
+// acknowledged. Taps are applied in arrival order, so the server order and the versions are as without batching.
+// Nothing waits on a timer: a tap that arrives alone is written on the next turn of the event loop.
+interface PendingTap {
+  userId: string;
+  pieceId: number;
+  op: ProgressOp;
+  resolve: (r: { progress: ProgressOut; applied: boolean }) => void;
+  reject: (e: unknown) => void;
+}
+interface TapQueue {
+  pending: PendingTap[];
+  busy: boolean;
+}
+// Keeps one transaction short enough that its first tap does not wait long for the last.
+const MAX_BATCH = 64;
+const queues = new WeakMap<Knex, TapQueue>();
+
+async function writeBatches(db: Knex, q: TapQueue) {
+  try {
+    while (q.pending.length) {
+      const batch = q.pending.splice(0, MAX_BATCH);
+      let outcomes: Array<{ ok: { progress: ProgressOut; applied: boolean } } | { error: unknown }>;
+      try {
+        const conn = (await db.client.acquireConnection()) as Database.Database;
+        try {
+          const st = statementsFor(conn);
+          outcomes = conn
+            .transaction(() =>
+              batch.map((tap) => {
+                try {
+                  return { ok: st.applyTap(st, tap) };
+                } catch (error) {
+                  return { error };
+                }
+              }),
+            )
+            .immediate();
+        } finally {
+          await db.client.releaseConnection(conn);
         }
-        case 'undo':
-          undone = st.lastLive.get(pieceId);
-          if (!undone) throw new HttpError(409, 'There is nothing to undo on this piece yet.');
-          after = clampPosition(shape, JSON.parse(undone.before) as Position);
-          break;
+      } catch (error) {
+        // BEGIN or COMMIT failed (or the connection could not be had): nothing in this batch is kept.
+        for (const tap of batch) tap.reject(error);
+        continue;
       }
-      const version = (row?.version ?? 0) + 1;
-      const done = doneAt(shape, after);
-      const payload = JSON.stringify(op.to ? { to: op.to } : {});
-      const { id } = st.insert.get(pieceId, op.opId, op.action, payload, JSON.stringify(before), JSON.stringify(after), op.at ?? null, version)!;
-      if (undone) st.markUndone.run(id, undone.id);
-      const updatedAt = new Date().toISOString();
-      st.upsert.run(pieceId, after.copy, after.round, after.step, done, version, updatedAt);
-      st.touchProject.run(updatedAt, projectId);
-      return { progress: { ...after, done, version, updatedAt }, applied: true };
-    })
-    .immediate();
+      const hub = hubFor(db);
+      batch.forEach((tap, i) => {
+        const outcome = outcomes[i];
+        if ('error' in outcome) return tap.reject(outcome.error);
+        if (outcome.ok.applied) {
+          hub.emit(`piece:${tap.pieceId}`, {
+            type: 'progress',
+            progress: outcome.ok.progress,
+            opId: tap.op.opId,
+          } satisfies StreamMessage);
+        }
+        tap.resolve(outcome.ok);
+      });
+    }
+  } finally {
+    q.busy = false;
+  }
 }
 
 /**
  * Applies one tap. A repeated opId (a retry, or the same tap from a second tab) returns the current position
  * without applying anything. Throws 409 past the end of the piece and when there is nothing to undo.
+ * Resolves only after the tap's transaction is committed.
  */
-export async function applyProgress(db: Knex, userId: string, pieceId: number, op: ProgressOp): Promise<{ progress: ProgressOut; applied: boolean }> {
-  const conn = (await db.client.acquireConnection()) as Database.Database;
-  let result: { progress: ProgressOut; applied: boolean };
-  try {
-    const piece = statementsFor(conn).piece.get(pieceId, userId);
-    if (!piece) throw notFound('That piece');
-    const shape = shapeForInstructions(piece.instructions ?? '', piece.copies, piece.terms === 'uk' ? 'uk' : 'us');
-    result = applyInTransaction(conn, shape, pieceId, piece.project_id, op);
-  } finally {
-    await db.client.releaseConnection(conn);
+export function applyProgress(
+  db: Knex,
+  userId: string,
+  pieceId: number,
+  op: ProgressOp,
+): Promise<{ progress: ProgressOut; applied: boolean }> {
+  let q = queues.get(db);
+  if (!q) {
+    q = { pending: [], busy: false };
+    queues.set(db, q);
   }
-  if (result.applied) hubFor(db).emit(`piece:${pieceId}`, { type: 'progress', progress: result.progress, opId: op.opId } satisfies StreamMessage);
-  return result;
+  const queue = q;
+  return new Promise((resolve, reject) => {
+    queue.pending.push({ userId, pieceId, op, resolve, reject });
+    if (queue.busy) return;
+    queue.busy = true;
+    // setImmediate runs after the requests already read in this turn of the event loop have reached this point,
+    // so they share the transaction.
+    setImmediate(() => void writeBatches(db, queue));
+  });
 }
 
 /**
@@ -243,12 +365,21 @@ export async function progressHistory(db: Knex, userId: string, pieceId: number,
     .select('before');
   return {
     version: row?.version ?? 0,
-    undo: live.reverse().map((e: { before: string }) => clampPosition(shape, JSON.parse(e.before) as Position)),
+    undo: live
+      .reverse()
+      .map((e: { before: string }) => clampPosition(shape, JSON.parse(e.before) as Position)),
   };
 }
 
 /** Writes a starting position for the demo piece (seed only: no events, nothing to undo). */
-export async function seedProgress(trx: Knex, pieceId: number, instructions: string, copies: number, terms: Terms, at: Position) {
+export async function seedProgress(
+  trx: Knex,
+  pieceId: number,
+  instructions: string,
+  copies: number,
+  terms: Terms,
+  at: Position,
+) {
   const shape = shapeForInstructions(instructions, copies, terms);
   const p = clampPosition(shape, at);
   await trx('piece_progress')
@@ -261,8 +392,7 @@ export async function seedProgress(trx: Knex, pieceId: number, instructions: str
 // ---- live updates for a second device (server-sent events) ----
 
 export type StreamMessage =
-  | { type: 'progress'; progress: ProgressOut; opId: string | null }
-  | { type: 'placements'; pieceId: number };
+  { type: 'progress'; progress: ProgressOut; opId: string | null } | { type: 'placements'; pieceId: number };
 
 // One emitter per database, so apps built for separate test databases in one process never hear each other.
 const hubs = new WeakMap<Knex, EventEmitter>();
