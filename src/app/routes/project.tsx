@@ -195,6 +195,7 @@ export default function ProjectRoute() {
                     terms={p.terms}
                     yarnWeight={weightFor(p, piece.yarns)}
                     showShape={piece.id === current?.id}
+                    compact={ordering}
                     actions={
                       ordering ? (
                         <>

@@ -38,6 +38,7 @@ export function PieceCard({
   yarnWeight,
   showShape = false,
   actions,
+  compact = false,
 }: {
   projectId: number;
   piece: ProjectPiece;
@@ -47,6 +48,8 @@ export function PieceCard({
   showShape?: boolean;
   /** Buttons beside the name (edit, move), from the screen. */
   actions?: ReactNode;
+  /** Name and progress only, e.g. while the pieces are being put in order. */
+  compact?: boolean;
 }) {
   const check = useMemo(() => checkPiece(piece.instructions, { terms }), [piece.instructions, terms]);
   const marks = useMemo<SilhouetteMark[]>(() => {
@@ -107,13 +110,13 @@ export function PieceCard({
         </div>
       </div>
 
-      {piece.totals.rounds > 0 ? (
+      {compact ? null : piece.totals.rounds > 0 ? (
         <ButtonLink to={paths.tally(projectId, piece.id)} size="lg" className="w-full" aria-label={`Count ${piece.name}`}>
           Count
         </ButtonLink>
       ) : null}
 
-      {piece.placements.length ? (
+      {!compact && piece.placements.length ? (
         <div>
           <h4 className="mb-1 font-semibold">Placements</h4>
           <ul className="flex flex-col gap-1 text-sm">
@@ -136,7 +139,7 @@ export function PieceCard({
         </div>
       ) : null}
 
-      {check.rounds.length ? (
+      {!compact && check.rounds.length ? (
         <details open={showShape} className="group rounded-soft bg-wool/40 px-4 py-2 dark:bg-white/5">
           <summary className="flex min-h-tap cursor-pointer list-none items-center gap-2 font-semibold [&::-webkit-details-marker]:hidden">
             <span className="flex-1">
@@ -156,7 +159,7 @@ export function PieceCard({
         </details>
       ) : null}
 
-      {piece.instructions.trim() ? (
+      {!compact && piece.instructions.trim() ? (
         <details className="group rounded-soft bg-wool/40 px-4 py-2 dark:bg-white/5">
           <summary className="flex min-h-tap cursor-pointer list-none items-center gap-2 font-semibold [&::-webkit-details-marker]:hidden">
             <span className="flex-1">Instructions</span>
