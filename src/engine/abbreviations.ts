@@ -210,7 +210,7 @@ export const SYNONYMS: ReadonlyMap<string, string> = new Map([
   ['space', 'sp'], ['spaces', 'sp'], ['sps', 'sp'],
   ['×', 'x'], ['times', 'times'], ['time', 'times'],
   ['doesnt', 'not'], ["doesn't", 'not'], ['dont', 'not'], ['no', 'not'],
-  ['counting', 'counts'], ['count', 'counts'], ['leaving', 'leave'], ['until', 'to'], ['till', 'to'],
+  ['counting', 'counts'], ['count', 'counts'], ['leaving', 'leave'], ['until', 'to'], ['till', 'to'], ['ending', 'end'],
   ['tch', 'ch'], ['beg', 'beg'],
   ['scs', 'sc'], ['hdcs', 'hdc'], ['dcs', 'dc'], ['trs', 'tr'], ['dtrs', 'dtr'], ['htrs', 'htr'],
 ]);

@@ -42,6 +42,10 @@ export interface StNode {
   skippedCountAlt?: { id: number; defaultCounts: boolean };
   /** Inherits from "… and in each ch across". */
   inherited?: boolean;
+  /** "dec around" with nothing between the stitch and "around": may close a short sequence (see AroundInfo). */
+  bareFill?: boolean;
+  /** "sl st in next 2 sts, ch 3, …": slip stitches before the starting chain move the yarn; they make no stitch. */
+  moving?: boolean;
 }
 
 export type Times =
@@ -63,6 +67,24 @@ export interface GroupNode {
   loop: Loop | null;
   /** Star repeats keep their marker column for problems. */
   star?: boolean;
+  /** "…, ending last rep at **" / "ending last rep with …": what the last time through works instead of `body`. */
+  last?: Node[];
+  /** "sc, dec around": a short sequence read as a repeat around (see AroundInfo). */
+  around?: AroundInfo;
+}
+
+/**
+ * "sc, dec around" means "(sc, dec) around" (common practice), while "2 sc in first st, sc around" means
+ * "then sc in each remaining st". The group holds the repeat reading; `literal` is the other one, chosen
+ * by the ambiguity `id` (null: no other reading). `repeatFirst` says which reading is tried first.
+ */
+export interface AroundInfo {
+  id: number | null;
+  repeatFirst: boolean;
+  literal: Node[];
+  /** As written, e.g. "sc, dec around", and the sequence repeated, e.g. "sc, dec". */
+  text: string;
+  seq: string;
 }
 
 export interface SkipNode { t: 'skip'; n: number | 'fill'; col: number; noun: 'st' | 'ch' | 'sp' }
@@ -74,6 +96,8 @@ export interface RingNode { t: 'ring'; col: number; formed: boolean }
 export interface OtherSideNode { t: 'otherside'; col: number }
 export interface LeftoverNode { t: 'leftover'; loop: Loop; round: number; kind: 'round' | 'row'; wording: 'left' | 'of'; col: number }
 export interface EvenlyNode { t: 'evenly'; kind: 'inc' | 'dec'; n: number; col: number; loop: Loop | null }
+/** A run of 2 or more stars ("**"): a place a repeat refers to ("rep from * to **", "ending last rep at **", "rep from **"). Works nothing. */
+export interface MarkNode { t: 'mark'; level: number; col: number }
 
 export type Node =
   | StNode
@@ -86,7 +110,8 @@ export type Node =
   | RingNode
   | OtherSideNode
   | LeftoverNode
-  | EvenlyNode;
+  | EvenlyNode
+  | MarkNode;
 
 export interface RepRound {
   kind: 'round' | 'row';
@@ -112,6 +137,8 @@ export interface Parsed {
   notes: ParsedNote[];
   /** Number of alternatives per ambiguity id. */
   alts: number[];
+  /** Ambiguity ids whose second reading is taken only when it gives the stated count (never when none is stated). */
+  statedOnly: number[];
   repRound: RepRound | null;
   /** Nothing to do in the text (only a stated count, or empty). */
   empty: boolean;

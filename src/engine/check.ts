@@ -2,7 +2,7 @@
 // every other line as a note at its place.
 
 import type { LeftoverNode, Node, Parsed } from './ast';
-import { evaluate, type EvalEnv, type EvalResult } from './evaluate';
+import { evaluate, type EvalEnv, type EvalResult, type Layout } from './evaluate';
 import { readLabel, type Label } from './labels';
 import { classifyNote } from './notes';
 import { parseInstruction, startsLikeInstruction } from './parser';
@@ -43,6 +43,10 @@ class PieceReader {
   lastNumber = 0;
   lastKind: 'round' | 'row' = 'round';
   pendingLeftover: LeftoverNode | null = null;
+  /** What the last round made, in its working order (chain spaces for "in each ch-sp"); see EvalEnv. */
+  prevLayout: Layout | null | undefined = undefined;
+  /** The last round ended with "turn": the next one meets its stitches the other way round. */
+  prevTurned = false;
   telltales = new Set<string>();
   truncated = false;
   steps = 0;
@@ -165,6 +169,10 @@ class PieceReader {
         leftover: this.leftoverOf,
         maxSteps: MAX_PIECE_STEPS - this.steps,
       };
+      // Rows turn, so a row meets the row before from its last stitch (common practice); so does a round
+      // after a "turn".
+      const turned = kind === 'row' || this.prevTurned || turnsFirst(parsed.nodes);
+      env.prevLayout = this.prevLayout && turned ? [...this.prevLayout].reverse() : this.prevLayout;
       const problems: Problem[] = j === 0 ? [...lineProblems] : [];
       let nodes = parsed.nodes;
       let source = parsed;
@@ -195,8 +203,13 @@ class PieceReader {
       let stitches: number;
       /** What the round makes when worked from the stated count of the round before (see prevStated). */
       let fromStated: number | null = null;
+      const uncertain = parsed.uncertain || (res?.uncertain ?? false);
       if (!res) stitches = stated ?? this.prev;
-      else if (parsed.uncertain) stitches = stated ?? res.stitches;
+      else if (uncertain) {
+        stitches = stated ?? res.stitches;
+        // A hand check asked for while counting (not while reading) is said by the count itself.
+        if (!parsed.uncertain) problems.push(...(source === parsed ? res.problems : res.problems.map((p) => ({ ...p, column: rep!.col }))));
+      }
       else {
         stitches = res.stitches;
         // Of two counts, the one the round makes is the one meant; the other was already said.
@@ -246,8 +259,11 @@ class PieceReader {
       this.waiting = [];
       // The count the pattern means from here: its stated count, else what the round makes from the
       // count meant before it (an unreadable or empty round keeps what was meant).
-      const meant = stated ?? (!res ? (this.prevStated ?? stitches) : parsed.uncertain ? stitches : (fromStated ?? stitches));
+      const meant = stated ?? (!res ? (this.prevStated ?? stitches) : uncertain ? stitches : (fromStated ?? stitches));
       this.prevStated = meant !== stitches ? meant : null;
+      // The chain spaces the next round may work into: known only when this round was counted in full.
+      this.prevLayout = res && !uncertain && res.stitches === stitches ? res.layout : null;
+      this.prevTurned = turnsLast(source === parsed ? parsed.nodes : nodes);
       this.prev = stitches;
       this.prevName = name;
       this.lastNumber = number;
@@ -321,6 +337,29 @@ class PieceReader {
       totalSteps: this.rounds.reduce((s, r) => s + r.steps.length, 0),
     };
   }
+}
+
+function isWork(n: Node): boolean {
+  return n.t === 'st' || n.t === 'group' || n.t === 'skip' || n.t === 'evenly';
+}
+
+/** "ch 1, turn, …": the round turns before it starts. */
+function turnsFirst(nodes: Node[]): boolean {
+  for (const n of nodes) {
+    if (n.t === 'turn') return true;
+    if (isWork(n) && !(n.t === 'st' && n.entry.id === 'ch')) return false;
+  }
+  return false;
+}
+
+/** "…, ch 1, turn": the round ends by turning. */
+function turnsLast(nodes: Node[]): boolean {
+  for (let i = nodes.length - 1; i >= 0; i--) {
+    const n = nodes[i];
+    if (n.t === 'turn') return true;
+    if (isWork(n) && !(n.t === 'st' && n.entry.id === 'ch')) return false;
+  }
+  return false;
 }
 
 function startOf(opts: CheckOptions | undefined): number {

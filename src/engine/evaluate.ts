@@ -18,7 +18,18 @@ export interface EvalEnv {
   leftover: (node: LeftoverNode) => { count: number; problem: string | null };
   /** Steps this round may still add (the piece as a whole has a budget too). */
   maxSteps?: number;
+  /**
+   * What the previous round made, in the order this round meets it (see `layout` below): chain spaces
+   * are found here. Undefined: there is no round before; null: it could not be followed stitch by stitch.
+   */
+  prevLayout?: Layout | null;
 }
+
+/**
+ * The stitches a round makes, in order, as runs: a positive number is that many stitches, a negative one
+ * that many chains in a row (a chain space for the next round), e.g. [1, -2, 1, -2] for "(sc, ch 2) x2".
+ */
+export type Layout = number[];
 
 export interface EvalResult {
   steps: Step[];
@@ -29,6 +40,9 @@ export interface EvalResult {
   problems: Problem[];
   /** False when some choice could not be settled (only used to pick between readings). */
   clean: boolean;
+  layout: Layout;
+  /** Part of the round could not be counted (a hand check was asked for): the stated count stands. */
+  uncertain: boolean;
 }
 
 /** Per round: beyond this the text is almost surely a slip, and the counter could not walk it anyway. */
@@ -38,6 +52,35 @@ const MAX_OPS = 200000;
 class Budget extends Error {}
 
 type Base = 'prev' | 'ring' | 'chain' | 'leftover';
+
+/** What a trial run of a repeat must put back (see Walker.trial). */
+interface Snapshot {
+  steps: number;
+  problems: number;
+  pos: number;
+  offset: number;
+  base: Base;
+  ringKind: 'mr' | 'ring';
+  side: 1 | 2;
+  chainPool: number | null;
+  foundationLen: number | null;
+  pool: number;
+  made: Map<string, number>;
+  loops: Set<Loop>;
+  loopMode: Loop | null;
+  overCol: number | null;
+  fitFailed: boolean;
+  leave: { n: number | null; col: number } | null;
+  repeat: { index: number; of: number } | null;
+  anyWorked: boolean;
+  clean: boolean;
+  uncertain: boolean;
+  layout: Layout;
+  spaceList: number[] | null | undefined;
+  spacePtr: number;
+  saidSpaces: boolean;
+  absorb: { step: number; pos: number } | null;
+}
 
 const error = (message: string, column: number | null): Problem => ({ message, column, severity: 'error' });
 const warning = (message: string, column: number | null): Problem => ({ message, column, severity: 'warning' });
@@ -76,6 +119,15 @@ class Walker {
   anyWorked = false;
   ops = 0;
   clean = true;
+  uncertain = false;
+  layout: Layout = [];
+  /** Chain spaces of the previous round as [start, end) pairs of positions, once asked for. */
+  spaceList: number[] | null | undefined;
+  /** First space not yet passed. */
+  spacePtr = 0;
+  saidSpaces = false;
+  /** After "in each ch-sp around": the step that may pass over the stitches after the last space. */
+  absorb: { step: number; pos: number } | null = null;
   readonly maxSteps: number;
 
   constructor(
@@ -102,9 +154,11 @@ class Walker {
     if (++this.ops > MAX_OPS) throw new Budget();
   }
 
-  step(action: string, text: string, worksInto: number, makes: number, loop: Loop | null, column: number): void {
+  /** `lay`: what the stitches made are for the next round's layout (0 stitches, 1 chains, 2 recorded by the caller). */
+  step(action: string, text: string, worksInto: number, makes: number, loop: Loop | null, column: number, lay: 0 | 1 | 2 = 0): void {
     if (this.steps.length >= this.maxSteps) throw new Budget();
     this.tick();
+    if (makes > 0 && lay !== 2) this.lay(makes, lay === 1);
     const full = loop ? `${text} — ${LOOP_WORDS[loop]}` : text;
     this.steps.push({
       index: this.steps.length,
@@ -122,6 +176,137 @@ class Walker {
       this.anyWorked = true;
       if (this.base !== 'ring' && this.pos > this.pool && this.overCol === null) this.overCol = column;
     }
+  }
+
+  lay(n: number, chain: boolean): void {
+    const L = this.layout;
+    const last = L.length - 1;
+    if (last >= 0 && L[last] < 0 === chain) L[last] += chain ? -n : n;
+    else L.push(chain ? -n : n);
+  }
+
+  /** The previous round's chain spaces, or null when they cannot be known here. */
+  spaces(): number[] | null {
+    if (this.base !== 'prev') return null;
+    if (this.spaceList !== undefined) return this.spaceList;
+    const layout = this.env.prevLayout;
+    let list: number[] | null = null;
+    if (layout) {
+      let total = 0;
+      let stitches = false;
+      const pairs: number[] = [];
+      for (const run of layout) {
+        if (run < 0) pairs.push(total, total - run);
+        else stitches = true;
+        total += Math.abs(run);
+      }
+      // A line of chains only is a foundation chain, not chain spaces.
+      if (total === this.env.prev && pairs.length && stitches) list = pairs;
+    }
+    this.spaceList = list;
+    return list;
+  }
+
+  /** End of the next chain space not yet passed, or -1. */
+  nextSpaceEnd(): number {
+    const sp = this.spaceList!;
+    while (this.spacePtr < sp.length && sp[this.spacePtr + 1] <= this.pos) this.spacePtr += 2;
+    return this.spacePtr < sp.length ? sp[this.spacePtr + 1] : -1;
+  }
+
+  /** Chain spaces ahead that end by `limit`. */
+  spacesAhead(limit: number): number {
+    const sp = this.spaceList!;
+    this.nextSpaceEnd();
+    let n = 0;
+    for (let k = this.spacePtr; k < sp.length && sp[k + 1] <= limit; k += 2) n++;
+    return n;
+  }
+
+  /** "in each ch-sp around" where the spaces cannot be known: said once, the round keeps its stated count. */
+  spacesByHand(col: number): void {
+    this.uncertain = true;
+    if (this.saidSpaces) return;
+    this.saidSpaces = true;
+    const prev = this.env.prevName;
+    let why: string;
+    if (this.base !== 'prev') why = 'this round does not work into the stitches of the round before';
+    else if (this.env.prevLayout === undefined || !prev || prev === 'the start') why = 'there is no round before this line to count them from';
+    else if (this.env.prevLayout === null) why = `${prev} could not be followed stitch by stitch`;
+    else if (!this.env.prevLayout.some((x) => x < 0)) why = `${prev} makes no chains between its stitches`;
+    else why = `${prev} could not be followed stitch by stitch`;
+    this.problems.push(warning(`Whorlbook counts 'in each ch-sp' from the chain spaces of the round before, but ${why}; check this round by hand`, col));
+  }
+
+  /** How many times "in each ch-sp around" works: one per chain space left (leaving `leave` stitches). */
+  spaceUnits(units: Units, size: number, what: string, col: number): number {
+    const leave = units.u === 'fillTo' ? units.leave : 0;
+    if (units.u === 'n') return units.n;
+    if (!this.spaces()) {
+      this.spacesByHand(col);
+      const rem = this.remaining() - leave;
+      return rem > 0 ? Math.floor(rem / Math.max(1, size)) : 0;
+    }
+    const count = this.spacesAhead(this.pool - leave);
+    if (count === 0) {
+      this.problems.push(warning(`'${what}' has no chain spaces left to work into`, col));
+      this.clean = false;
+    }
+    return count;
+  }
+
+  /** After a fill over chain spaces: the stitches after the last space belong to it (common practice). */
+  markAbsorb(units: Units): void {
+    if (units.u === 'fill' && this.steps.length) this.absorb = { step: this.steps.length - 1, pos: this.pos };
+  }
+
+  snapshot(): Snapshot {
+    return {
+      steps: this.steps.length, problems: this.problems.length, pos: this.pos, offset: this.offset, base: this.base,
+      ringKind: this.ringKind, side: this.side, chainPool: this.chainPool, foundationLen: this.foundationLen, pool: this.pool,
+      made: new Map(this.made), loops: new Set(this.loops), loopMode: this.loopMode, overCol: this.overCol,
+      fitFailed: this.fitFailed, leave: this.leave, repeat: this.repeat, anyWorked: this.anyWorked, clean: this.clean,
+      uncertain: this.uncertain, layout: [...this.layout], spaceList: this.spaceList, spacePtr: this.spacePtr,
+      saidSpaces: this.saidSpaces, absorb: this.absorb,
+    };
+  }
+
+  restore(s: Snapshot): void {
+    this.steps.length = s.steps;
+    this.problems.length = s.problems;
+    this.pos = s.pos;
+    this.offset = s.offset;
+    this.base = s.base;
+    this.ringKind = s.ringKind;
+    this.side = s.side;
+    this.chainPool = s.chainPool;
+    this.foundationLen = s.foundationLen;
+    this.pool = s.pool;
+    this.made = s.made;
+    this.loops = s.loops;
+    this.loopMode = s.loopMode;
+    this.overCol = s.overCol;
+    this.fitFailed = s.fitFailed;
+    this.leave = s.leave;
+    this.repeat = s.repeat;
+    this.anyWorked = s.anyWorked;
+    this.clean = s.clean;
+    this.uncertain = s.uncertain;
+    this.layout = s.layout;
+    this.spaceList = s.spaceList;
+    this.spacePtr = s.spacePtr;
+    this.saidSpaces = s.saidSpaces;
+    this.absorb = s.absorb;
+  }
+
+  /** Stitches worked by one time through `body` from here, without keeping anything of it. */
+  trial(g: GroupNode, body: Node[], loop: Loop | null): number {
+    const snap = this.snapshot();
+    const start = this.pos;
+    this.iteration(g, loop, 1, 1, null, [], body);
+    const w = this.offset + this.pos - snap.offset - start;
+    this.restore(snap);
+    return w;
   }
 
   addMade(key: string, n: number): void {
@@ -149,8 +334,19 @@ class Walker {
       case 'fromHook':
         this.enterChain(into.nth, at);
         return Math.min(1, entry.works);
-      case 'space':
-        return into.size;
+      case 'space': {
+        if (!this.spaces()) return into.size;
+        // With the previous round's layout known, "in next ch-sp" works up to the end of the next chain
+        // space, passing the stitches before it.
+        const end = this.nextSpaceEnd();
+        if (end >= 0) return end - this.pos;
+        if (!this.saidSpaces) {
+          this.saidSpaces = true;
+          this.problems.push(error(`${this.env.prevName ?? 'The round before'} has no chain space left to work into here`, at));
+        }
+        this.clean = false;
+        return 0;
+      }
       case 'air':
         return 0;
     }
@@ -214,8 +410,10 @@ class Walker {
         return this.stitch(n, loop);
       case 'group':
         return this.group(n, loop);
+      case 'mark':
+        return;
       case 'skip': {
-        const count = n.n === 'fill' ? Math.max(0, this.remaining()) : n.n;
+        const count = n.noun === 'sp' && n.n !== 'fill' && this.spaces() ? this.worksPer({ t: 'space', size: n.n }, STITCH_BY_ID.get('sc')!, n.col) : n.n === 'fill' ? Math.max(0, this.remaining()) : n.n;
         const what = n.noun === 'ch' ? plural(count, 'chain', 'chains') : n.noun === 'sp' ? 'the next space' : plural(count, 'stitch', 'stitches');
         this.step('sk', count === 1 && n.noun !== 'sp' ? `skip the next ${this.noun()}` : `skip the next ${what}`, count, 0, null, n.col);
         return;
@@ -291,9 +489,12 @@ class Walker {
       return;
     }
     const wpuFirst = this.worksPer(n.into, e, n.col);
-    const count = this.unitCount(n.units, wpuFirst || e.works, n.word, n.col);
+    const count =
+      n.into.t === 'space' && n.units.u !== 'n'
+        ? this.spaceUnits(n.units, n.into.size, n.word, n.col)
+        : this.unitCount(n.units, wpuFirst || e.works, n.word, n.col);
     const madeKey = n.incOf ? n.incOf.madeAs : e.madeAs;
-    const makes = e.kind === 'inc' ? 2 : n.per * e.makes;
+    const makes = n.moving ? 0 : e.kind === 'inc' ? 2 : n.per * e.makes;
     const { action, text } = this.describe(n, makes);
     if (n.into.t === 'fromHook' && n.skippedCountAlt) {
       const pick = this.choice(n.skippedCountAlt.id);
@@ -310,6 +511,7 @@ class Walker {
       this.step(action, text + counter, wpu, makes, loop, n.col);
       this.addMade(madeKey, makes);
     }
+    if (n.into.t === 'space') this.markAbsorb(n.units);
   }
 
   /** Where a stitch goes, in words. */
@@ -359,16 +561,25 @@ class Walker {
       const baseAbbr = base ? this.abbr(base) : this.abbr(e);
       return { action: e.id, text: `${this.abbr(e)}: ${baseAbbr} the next ${over} ${noun === 'chain' ? 'chains' : 'stitches'} together` };
     }
+    if (n.moving) return { action: e.id, text: `${a} ${this.where(n)} (moves the yarn into place; not a stitch)` };
     if (n.per > 1) return { action: `${n.per} ${this.abbrUs(e)}`, text: `${n.per} ${a} ${this.where(n)}` };
     if (makes === 0) return { action: e.id, text: `${a} (not counted as a stitch)` };
     return { action: e.id, text: `${a} ${this.where(n)}` };
   }
 
-  iteration(g: GroupNode, loop: Loop | null, index: number, of: number, keep: { index: number; of: number } | null, infos: Array<{ index: number; of: number }>): void {
+  iteration(
+    g: GroupNode,
+    loop: Loop | null,
+    index: number,
+    of: number,
+    keep: { index: number; of: number } | null,
+    infos: Array<{ index: number; of: number }>,
+    body: Node[] = g.body,
+  ): void {
     const info = { index, of };
     infos.push(info);
     this.repeat = keep ?? (g.times.k === 'n' && g.times.n === 1 && !g.star ? this.repeat : info);
-    this.run(g.body, loop);
+    this.run(body, loop);
   }
 
   abbrUs(e: StitchEntry): string {
@@ -385,7 +596,8 @@ class Walker {
         return;
       case 'counts': {
         const as = n.countsAs ?? STITCH_BY_ID.get('dc')!;
-        const works = this.base === 'ring' || this.pool === 0 ? 0 : 1;
+        // After slip stitches that moved into place, the chain stands in the stitch they reached.
+        const works = this.base === 'ring' || this.pool === 0 || this.anyWorked ? 0 : 1;
         this.step(`ch ${count}`, `ch ${count} (counts as the first ${this.abbr(as)})`, works, 1, loop, n.col);
         this.addMade(as.madeAs, 1);
         return;
@@ -398,7 +610,7 @@ class Walker {
         for (let k = 1; k <= count; k++) this.step(ch, `ch (${k} of ${count}, for the ring)`, 0, 0, null, n.col);
         return;
       default:
-        for (let k = 1; k <= count; k++) this.step(ch, count > 1 ? `ch (${k} of ${count})` : 'ch 1', 0, 1, null, n.col);
+        for (let k = 1; k <= count; k++) this.step(ch, count > 1 ? `ch (${k} of ${count})` : 'ch 1', 0, 1, null, n.col, 1);
         this.addMade('ch', count);
     }
   }
@@ -406,33 +618,46 @@ class Walker {
   group(g: GroupNode, outerLoop: Loop | null): void {
     const loop = g.loop ?? outerLoop;
     if (g.into) {
-      const inner = collect(g.body);
+      const inner = innerOf(g);
       const wpuFirst = g.into.t === 'ring' ? 0 : this.worksPer(g.into, STITCH_BY_ID.get('sc')!, g.col);
       if (g.into.t === 'ring' && this.base !== 'ring') this.enterRing('mr');
-      const count = this.unitCount(g.units, wpuFirst || 1, g.display, g.col);
+      const count =
+        g.into.t === 'space' && g.units.u !== 'n'
+          ? this.spaceUnits(g.units, g.into.size, g.display, g.col)
+          : this.unitCount(g.units, wpuFirst || 1, g.display, g.col);
       const where =
         g.into.t === 'same' ? 'in the same stitch' : g.into.t === 'ring' ? 'in the ring' : g.into.t === 'space' ? 'in the next space' : `in the next ${this.noun()}`;
       for (let k = 1; k <= count; k++) {
         const wpu = k === 1 ? wpuFirst : this.worksPer(g.into.t === 'fromHook' ? { t: 'next' } : g.into, STITCH_BY_ID.get('sc')!, g.col);
-        this.step(g.display, `${g.display} ${where}`, wpu, inner.makes, loop ?? this.loopMode, g.col);
+        this.step(g.display, `${g.display} ${where}`, wpu, inner.makes, loop ?? this.loopMode, g.col, 2);
+        for (const run of inner.runs) this.lay(Math.abs(run), run < 0);
         for (const [key, v] of Object.entries(inner.made)) this.addMade(key, v);
       }
+      if (g.into.t === 'space') this.markAbsorb(g.units);
+      return;
+    }
+    if (g.around && g.around.id !== null && (this.choice(g.around.id) === 0) !== g.around.repeatFirst) {
+      // "2 sc in first st, sc around": the rest of the round, as written.
+      this.run(g.around.literal, loop);
       return;
     }
     const outer = this.repeat;
     const infos: Array<{ index: number; of: number }> = [];
     // A plain group "(sc, inc), sc" is not a repeat: its steps keep the repeat they sit in.
     const plain = g.times.k === 'n' && g.times.n === 1 && !g.star;
+    const last = g.last;
     try {
       if (g.times.k === 'n' || g.times.k === 'alt') {
         const times = g.times.k === 'n' ? g.times.n : g.times.options[this.choice(g.times.id)] ?? g.times.options[0];
-        for (let i = 1; i <= times; i++) this.iteration(g, loop, i, times, plain ? outer : null, infos);
+        for (let i = 1; i <= times; i++) this.iteration(g, loop, i, times, plain ? outer : null, infos, last && i === times ? last : g.body);
         return;
       }
       // Fill: as many times as the stitches left allow, keeping `leave` for the instructions after.
       const leave = g.times.leave;
+      if (this.spaces() && this.fillBySpaces(g, loop, leave, infos)) return;
       const start = this.pos;
       const rem0 = this.remaining() - leave;
+      if (last) return this.fillWithLast(g, last, loop, rem0, infos);
       this.iteration(g, loop, 1, 1, null, infos);
       const w = this.pos - start;
       if (w <= 0) {
@@ -445,9 +670,15 @@ class Walker {
       const extra = Math.floor(after / w);
       const left = after % w;
       if (left) {
+        const fit = `but ${rem0} are left for it: it cannot fit the round (${plural(extra + 1, 'repeat leaves', 'repeats leave')} ${left} over)`;
+        // "Round 2 has 13" when the repeat is the whole round, as "sc, dec around" usually is.
+        const whole = start === 0 && leave === 0 && this.base === 'prev' && this.env.prevName && this.env.prevName !== 'the start';
+        const has = whole ? `but ${this.env.prevName} has ${rem0}: ${plural(extra + 1, 'repeat leaves', 'repeats leave')} ${left} over` : fit;
         this.problems.push(
           error(
-            `The repeat works ${plural(w, 'stitch', 'stitches')} each time, but ${rem0} are left for it: it cannot fit the round (${extra + 1} repeats leave ${left} over)`,
+            g.around
+              ? `'${g.around.text}' repeats '${g.around.seq}', which works ${plural(w, 'stitch', 'stitches')} each time, ${has}`
+              : `The repeat works ${plural(w, 'stitch', 'stitches')} each time, ${fit}`,
             g.col,
           ),
         );
@@ -460,6 +691,143 @@ class Walker {
       this.repeat = outer;
     }
   }
+
+  /** "*A**, B; rep from * around, ending last rep at **": full repeats, then one that stops at the mark. */
+  fillWithLast(g: GroupNode, last: Node[], loop: Loop | null, rem0: number, infos: Array<{ index: number; of: number }>): void {
+    const w = this.trial(g, g.body, loop);
+    const wl = this.trial(g, last, loop);
+    if (w <= 0) {
+      this.problems.push(error('This repeat works no stitches, so it cannot fill the round', g.col));
+      this.clean = false;
+      return;
+    }
+    let times = 1;
+    if (rem0 >= wl) {
+      const full = Math.floor((rem0 - wl) / w);
+      const left = (rem0 - wl) % w;
+      times = full + 1;
+      if (left) {
+        this.problems.push(
+          error(
+            `The repeat works ${plural(w, 'stitch', 'stitches')} each time${wl === w ? '' : ` and ${wl} the last time`}, but ${rem0} are left for it: it cannot fit the round (${plural(times, 'repeat leaves', 'repeats leave')} ${left} over)`,
+            g.col,
+          ),
+        );
+        this.fitFailed = true;
+        this.clean = false;
+      }
+    }
+    for (let i = 1; i <= times; i++) this.iteration(g, loop, i, times, null, infos, i === times ? last : g.body);
+  }
+
+  /**
+   * A fill whose body works into chain spaces ("*(3 dc, ch 2, 3 dc) in next ch-2 sp, ch 1; rep from *
+   * around"): it is worked once per space (or group of spaces) of the previous round. False when the body
+   * does not work into spaces, or not a fixed number of them.
+   */
+  fillBySpaces(g: GroupNode, loop: Loop | null, leave: number, infos: Array<{ index: number; of: number }>): boolean {
+    const a = spaceCount(g.body);
+    const b = g.last ? spaceCount(g.last) : a;
+    if (!a || b === null) return false;
+    const have = this.spacesAhead(this.pool - leave);
+    if (have === 0) {
+      this.problems.push(warning(`'${g.display === '*' ? 'rep from *' : g.display}' has no chain spaces left to work into`, g.col));
+      this.clean = false;
+      return true;
+    }
+    let times = 1;
+    if (have >= b) {
+      const left = (have - b) % a;
+      times = Math.floor((have - b) / a) + 1;
+      if (left) {
+        this.problems.push(
+          error(
+            `The repeat works into ${plural(a, 'chain space', 'chain spaces')} each time, but ${this.env.prevName ?? 'the round before'} has ${have} left: it cannot fit the round (${plural(times, 'repeat leaves', 'repeats leave')} ${left} over)`,
+            g.col,
+          ),
+        );
+        this.fitFailed = true;
+        this.clean = false;
+      }
+    }
+    for (let i = 1; i <= times; i++) this.iteration(g, loop, i, times, null, infos, g.last && i === times ? g.last : g.body);
+    this.markAbsorb({ u: 'fill' });
+    return true;
+  }
+}
+
+/** Chain spaces one time through these nodes works into, when fixed (0: none; null: it depends). */
+function spaceCount(nodes: Node[]): number | null {
+  let n = 0;
+  for (const x of nodes) {
+    if (x.t === 'st' && x.into.t === 'space') {
+      if (x.units.u !== 'n') return null;
+      n += x.units.n;
+    } else if (x.t === 'skip' && x.noun === 'sp') {
+      if (x.n === 'fill') return null;
+      n += 1;
+    } else if (x.t === 'group') {
+      if (x.into) {
+        if (x.into.t !== 'space') continue;
+        if (x.units.u !== 'n' || x.times.k !== 'n') return null;
+        n += x.units.n * x.times.n;
+        continue;
+      }
+      const inner = spaceCount(x.body);
+      if (inner === null) return null;
+      if (inner === 0) continue;
+      if (x.times.k !== 'n' || x.last) return null;
+      n += inner * x.times.n;
+    }
+  }
+  return n;
+}
+
+interface Inner {
+  makes: number;
+  made: Record<string, number>;
+  /** The layout one unit of the group makes (see Layout). */
+  runs: Layout;
+}
+
+// A group worked into each stitch is asked for its contents once per stitch; they depend only on the node.
+const innerCache = new WeakMap<GroupNode, Inner>();
+
+function innerOf(g: GroupNode): Inner {
+  const hit = innerCache.get(g);
+  if (hit) return hit;
+  const c = collect(g.body);
+  let runs: Layout = [];
+  if (!runsInto(g.body, runs, { left: 4096 }) || runs.reduce((s, x) => s + Math.abs(x), 0) !== c.makes) runs = c.makes ? [c.makes] : [];
+  const inner = { makes: c.makes, made: c.made, runs };
+  innerCache.set(g, inner);
+  return inner;
+}
+
+function pushRun(out: Layout, n: number, chain: boolean): void {
+  if (n <= 0) return;
+  const last = out.length - 1;
+  if (last >= 0 && out[last] < 0 === chain) out[last] += chain ? -n : n;
+  else out.push(chain ? -n : n);
+}
+
+/** The layout of a group's body, in order; false when it is too long or not fixed. */
+function runsInto(nodes: Node[], out: Layout, budget: { left: number }): boolean {
+  for (const n of nodes) {
+    if (--budget.left < 0) return false;
+    if (n.t === 'st') {
+      const units = n.units.u === 'n' ? n.units.n : 1;
+      if (n.entry.id === 'ch') {
+        if (n.role === 'turning') continue;
+        pushRun(out, units, n.role !== 'counts');
+      } else pushRun(out, units * (n.entry.kind === 'inc' ? 2 : n.per * n.entry.makes), false);
+    } else if (n.t === 'group') {
+      const t = n.times.k === 'n' ? n.times.n : n.times.k === 'alt' ? n.times.options[0] : 1;
+      const each = n.into && n.units.u === 'n' ? n.units.n : 1;
+      for (let i = 0; i < t * each; i++) if (!runsInto(n.body, out, budget)) return false;
+    }
+  }
+  return true;
 }
 
 function collectInto(ns: Node[], mul: number, out: { makes: number; made: Record<string, number> }): void {
@@ -530,7 +898,10 @@ export function evaluate(parsed: Parsed, env: EvalEnv, opts: { nodes?: Node[]; i
     combos.push(...all);
   }
   let first: EvalResult | null = null;
+  const statedOnly = parsed.statedOnly;
   for (const combo of combos) {
+    // A reading that needs the stated count to confirm it is not tried without one.
+    if (stated === null && statedOnly.length && first && statedOnly.some((id) => combo[id] === 1)) continue;
     const w = runOnce(nodes, env, combo, opts.initialLoop ?? null);
     if (!w) {
       const over: EvalResult = {
@@ -548,6 +919,8 @@ export function evaluate(parsed: Parsed, env: EvalEnv, opts: { nodes?: Node[]; i
           ),
         ],
         clean: false,
+        layout: [],
+        uncertain: false,
       };
       return over;
     }
@@ -561,6 +934,14 @@ export function evaluate(parsed: Parsed, env: EvalEnv, opts: { nodes?: Node[]; i
 }
 
 function finish(w: Walker, env: EvalEnv, parsed: Parsed): EvalResult {
+  if (w.absorb && w.base === 'prev' && w.pos === w.absorb.pos && w.pos < w.pool) {
+    // "(sc, ch 1) in each ch-sp around" ends in the last space: the stitches after it are passed on the way
+    // to the join (common practice), so they are not "left unworked".
+    const extra = w.pool - w.pos;
+    const st = w.steps[w.absorb.step];
+    w.steps[w.absorb.step] = { ...st, worksInto: st.worksInto + extra };
+    w.pos = w.pool;
+  }
   const worked = w.offset + w.pos;
   let stitches = 0;
   for (const st of w.steps) stitches += st.makes;
@@ -612,5 +993,5 @@ function finish(w: Walker, env: EvalEnv, parsed: Parsed): EvalResult {
   }
   const made: Record<string, number> = {};
   for (const [k, v] of w.made) made[k] = v;
-  return { steps: w.steps, made, loops: [...w.loops], worked, stitches, problems, clean: w.clean };
+  return { steps: w.steps, made, loops: [...w.loops], worked, stitches, problems, clean: w.clean, layout: w.layout, uncertain: w.uncertain };
 }

@@ -7,6 +7,7 @@ import type {
   ChainRole,
   GroupNode,
   Into,
+  MarkNode,
   Node,
   Parsed,
   ParsedNote,
@@ -40,8 +41,19 @@ type Item =
   | Node
   | { t: '*open'; col: number }
   | { t: '*close'; col: number; times: Times | null }
-  | { t: 'repfrom'; col: number; times: Times }
-  | { t: 'reptimes'; col: number; times: Times };
+  /** `from`/`to`: star levels of "rep from ** …" / "rep from * to ** …" (absent: a plain "rep from *"). */
+  | { t: 'repfrom'; col: number; times: Times; from?: number; to?: number; text: string }
+  | { t: 'reptimes'; col: number; times: Times }
+  | EndingItem;
+
+/**
+ * "ending last rep at **" (`at`: the last time through stops at that mark), "ending last rep with X"
+ * (`with`: X takes the place of the repeat's last instruction), "ending with X" (`after`: X comes after the
+ * repeats, which leave room for it).
+ */
+type EndingItem =
+  | { t: 'ending'; how: 'at'; level: number; col: number; text: string }
+  | { t: 'ending'; how: 'with' | 'after'; nodes: Node[]; col: number; text: string };
 
 const CLOSER: Record<string, string> = { '(': ')', '[': ']', '{': '}' };
 const SEP_PUNCT = new Set([',', ';', '.', ':', '+', '/', '=', '-']);
@@ -115,11 +127,15 @@ const STITCHY_WORDS = new Set(['sk', 'rep', 'join', 'turn', 'mr', 'blo', 'flo'])
 function isWorkNode(n: Node): boolean {
   return n.t === 'st' || n.t === 'group' || n.t === 'skip' || n.t === 'evenly';
 }
+/** Work that belongs to the round (not the slip stitches that move into place before it starts). */
+function isCountedWork(n: Node): boolean {
+  return isWorkNode(n) && !(n.t === 'st' && n.moving);
+}
 function notLoopNode(n: Node): boolean {
-  return n.t !== 'loop';
+  return n.t !== 'loop' && n.t !== 'mark';
 }
 function isDoingNode(n: Node): boolean {
-  return n.t !== 'loop' && n.t !== 'turn';
+  return n.t !== 'loop' && n.t !== 'turn' && n.t !== 'mark';
 }
 function isP(e: El | undefined, v: string): boolean {
   return isTok(e) && e.k === 'p' && e.v === v;
@@ -163,6 +179,9 @@ class Reader {
   problems: Problem[] = [];
   notes: ParsedNote[] = [];
   alts: number[] = [];
+  statedOnly: number[] = [];
+  /** A star repeat was already complained about: an unused '**' is part of the same slip. */
+  starTrouble = false;
   telltales = new Set<string>();
   uncertain = false;
   seenStitch = false;
@@ -765,7 +784,6 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
   }
 
   const col = startEl.col;
-  if (target && target.into.t === 'space' && target.units.u !== 'n') spacesAround(r, col);
   const end = c.i > start ? (c.els[c.i - 1] as El).end : col;
   if (evenly && (entry.kind === 'inc' || entry.kind === 'dec')) {
     const n = pre ?? post ?? (target && target.units.u === 'n' ? target.units.n : 1);
@@ -785,7 +803,8 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
   } else if (into.t === 'same' || into.t === 'fromHook' || into.t === 'space') {
     per = pre ?? post ?? 1;
     if (pre !== null && post !== null) times *= post;
-    units = target!.units.u === 'n' && target!.explicitCount ? target!.units : { u: 'n', n: 1 };
+    // "in each ch-sp around" keeps its fill: one unit per chain space left.
+    units = (target!.units.u === 'n' && target!.explicitCount) || (into.t === 'space' && target!.units.u !== 'n') ? target!.units : { u: 'n', n: 1 };
   } else if (target && target.units.u === 'n') {
     const m = target.units.n;
     per = pre ?? (m === 1 && !target.explicitCount ? post : null) ?? 1;
@@ -832,6 +851,7 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
   if (countsAs) node.countsAs = countsAs;
   if (annotated) node.annotated = true;
   if (inherit) node.inherited = true;
+  if (bareFill && pre === null && times === 1 && !inherit && into.t === 'next' && units.u !== 'n') node.bareFill = true;
   if (otherSide) out.push({ t: 'otherside', col });
   if (times !== 1) {
     const g: GroupNode = {
@@ -924,7 +944,6 @@ function readGroup(c: Cursor, r: Reader, out: Item[], clauseLoop: Loop | null): 
     break;
   }
   g.end = c.i > 0 ? Math.max(g.end, (c.els[c.i - 1] as El).end) : g.end;
-  if (g.into && g.into.t === 'space' && g.units.u !== 'n') spacesAround(r, g.col);
   out.push(g);
   r.seenStitch = true;
 }
@@ -936,16 +955,43 @@ function clauseWords(els: El[]): string[] {
   return out;
 }
 
+/** Stars written together ("**") are one marker of that many stars; "* *" are two single stars. */
+function starRun(els: El[], i: number): number {
+  let n = 0;
+  while (isP(els[i + n], '*') && (n === 0 || (els[i + n] as Tok).col === (els[i + n - 1] as Tok).end)) n++;
+  return n;
+}
+
+function markOf(level: number, col: number): MarkNode {
+  return { t: 'mark', level, col };
+}
+
+/** "ending last rep at **", "ending last rep with …", "ending with …", "end last rep at **". */
+function isEnding(els: El[]): boolean {
+  return isWord(els[0], 'end') && isWord(els[1], 'last', 'with', 'at', 'rep');
+}
+
 function readClause(cl: Clause, r: Reader, out: Item[], top: boolean): void {
   let els = cl.els;
   while (isP(els[0], '*')) {
-    out.push({ t: '*open', col: (els[0] as Tok).col });
-    els = els.slice(1);
+    const run = starRun(els, 0);
+    const col = (els[0] as Tok).col;
+    out.push(run === 1 ? { t: '*open', col } : markOf(run, col));
+    els = els.slice(run);
   }
   let closeStar: { col: number; times: Times | null } | null = null;
-  // In "rep from * …" the star names the repeat's start; it closes nothing.
-  const startsRep = isWord(els[0], 'rep', 'work', 'as');
+  // In "rep from * …" (and "…, then from * to ** once") the star names the repeat's start; it closes nothing.
+  const startsRep = isWord(els[0], 'rep', 'work', 'as') || (isWord(els[0], 'from') && isP(els[1], '*'));
   let starAt = startsRep ? -1 : els.findIndex(isStar);
+  if (starAt >= 0 && starRun(els, starAt) >= 2) {
+    // "sc 3**, …": a marker after the instructions; what follows it in the clause is read on.
+    const run = starRun(els, starAt);
+    if (starAt > 0) readClauseBody(els.slice(0, starAt), cl.sep, r, out, top);
+    out.push(markOf(run, (els[starAt] as Tok).col));
+    const rest = els.slice(starAt + run);
+    if (rest.length) readClause({ els: rest, sep: null }, r, out, top);
+    return;
+  }
   if (starAt > 0 && els[starAt - 1].k === 'br' && isNum(els[starAt + 1])) {
     // "(2 sc, inc)*6": the star is a times sign.
     els = [...els.slice(0, starAt), { ...(els[starAt] as Tok), k: 'word', v: 'x' }, ...els.slice(starAt + 1)];
@@ -1057,7 +1103,8 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
     out.push({ t: 'ring', col, formed: true });
     return;
   }
-  if (slipFirst && !nums.length && (words.includes('first') || words.includes('top') || words.includes('beg'))) {
+  // "sl st in first sc" joins; "sl st in first ch-sp" moves into that space.
+  if (slipFirst && !nums.length && (words.includes('first') || words.includes('top') || words.includes('beg')) && !words.includes('chsp') && !words.includes('sp')) {
     out.push({ t: 'join', col });
     return;
   }
@@ -1071,7 +1118,12 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
     return;
   }
   if (w0 === 'not' && (words.includes('join') || words.includes('turn'))) return;
-  if (w0 === 'rep' || (w0 === 'work' && (words.includes('as') || words.includes('rep'))) || (w0 === 'as' && (words.includes('rnd') || words.includes('row')))) {
+  if (
+    w0 === 'rep' ||
+    (w0 === 'from' && isP(els[1], '*')) ||
+    (w0 === 'work' && (words.includes('as') || words.includes('rep'))) ||
+    (w0 === 'as' && (words.includes('rnd') || words.includes('row')))
+  ) {
     readRep(els, r, out, top, col);
     return;
   }
@@ -1238,15 +1290,6 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
   }
 }
 
-/**
- * "in each ch-2 sp around" depends on where the chain spaces of the round before are, which the engine
- * does not track: say so rather than guess (the round keeps its stated count).
- */
-function spacesAround(r: Reader, col: number): void {
-  r.problems.push(warning("Whorlbook does not count 'in each ch-sp around' yet; check this round by hand", col));
-  r.uncertain = true;
-}
-
 function annotateLastChain(r: Reader, kind: BracketKind): void {
   const last = r.lastSt;
   if (!last || last.entry.id !== 'ch') return;
@@ -1265,22 +1308,37 @@ function readRep(els: El[], r: Reader, out: Item[], top: boolean, col: number): 
     i = 0;
     while (isWord(els[i], 'work', 'as', 'same', 'rep')) i++;
   }
+  if (isWord(els[0], 'from')) i = 0;
   if (isWord(els[i], 'from') || isP(els[i], '*')) {
     if (isWord(els[i], 'from')) i++;
-    while (isP(els[i], '*')) i++;
-    // "rep from * to * …" / "rep from * to ** …"
+    const from = starRun(els, i);
+    i += from;
+    // "rep from * to * …" closes the * repeat; "rep from * to ** …" repeats only the part up to the "**".
+    let to = 0;
     if (isWord(els[i], 'to') && isP(els[i + 1], '*')) {
-      i += 1;
-      while (isP(els[i], '*')) i++;
+      to = starRun(els, i + 1);
+      i += 1 + to;
     }
+    const text = r.slice(col, lastEnd(els));
     const tm = readTimes(els, i);
     const fill = tm ? null : readFill(els, i);
     let times: Times;
+    if (to >= 2) {
+      // The part up to "**" was already worked once in the first pass: "once" / "N (more) times" are
+      // the times it is worked again (common practice); "N times" may also mean N in all.
+      const n = tm ? tm.n : isNum(els[i]) ? (els[i] as Tok).n : null;
+      if (fill) times = { k: 'fill', leave: fill.leave };
+      else if (n === null) times = { k: 'n', n: 1 };
+      else if (tm?.more || n <= 1) times = { k: 'n', n };
+      else times = { k: 'alt', id: r.alt(2), options: [n, n - 1] };
+      out.push({ t: 'repfrom', col, times, to, from, text });
+      return;
+    }
     if (tm) times = tm.more ? { k: 'n', n: tm.n + 1 } : { k: 'alt', id: r.alt(2), options: [tm.n, tm.n + 1] };
     else if (fill) times = { k: 'fill', leave: fill.leave };
     else if (isNum(els[i])) times = { k: 'alt', id: r.alt(2), options: [(els[i] as Tok).n, (els[i] as Tok).n + 1] };
     else times = { k: 'fill', leave: 0 };
-    out.push({ t: 'repfrom', col, times });
+    out.push(from >= 2 ? { t: 'repfrom', col, times, from, text } : { t: 'repfrom', col, times, text });
     return;
   }
   if (isWord(els[i], 'rnd', 'row')) {
@@ -1341,12 +1399,84 @@ function starGroupOf(body: Node[], col: number, times: Times): GroupNode {
   return { t: 'group', body, into: null, units: { u: 'n', n: 1 }, times, col, end: col, display: '*', loop: null, star: true };
 }
 
+const stars = (level: number): string => '*'.repeat(level);
+
+function markIndex(list: Node[], level: number, lastOne = false): number {
+  let at = -1;
+  for (let i = 0; i < list.length; i++) {
+    const n = list[i];
+    if (n.t === 'mark' && n.level === level) {
+      at = i;
+      if (!lastOne) break;
+    }
+  }
+  return at;
+}
+
+function isRepeatGroup(n: Node | undefined): n is GroupNode {
+  return n !== undefined && n.t === 'group' && !n.into && !(n.times.k === 'n' && n.times.n === 1 && !n.star);
+}
+
+function isWorkingNode(n: Node): boolean {
+  return n.t === 'st' || n.t === 'group' || n.t === 'skip' || n.t === 'evenly';
+}
+
+/** Stitches these nodes work into, when that does not depend on the round (else null). */
+export function staticWorks(nodes: Node[]): number | null {
+  let w = 0;
+  for (const n of nodes) {
+    switch (n.t) {
+      case 'st':
+        if (n.entry.id === 'ch') break;
+        if (n.units.u !== 'n') return null;
+        if (n.into.t === 'next') w += n.units.n * n.entry.works;
+        else if (n.into.t !== 'same' && n.into.t !== 'ring') return null;
+        break;
+      case 'group': {
+        if (n.times.k !== 'n') return null;
+        if (n.into) {
+          if (n.units.u !== 'n' || (n.into.t !== 'next' && n.into.t !== 'same')) return null;
+          if (n.into.t === 'next') w += n.units.n * n.times.n;
+          break;
+        }
+        const b = staticWorks(n.body);
+        if (b === null) return null;
+        w += b * n.times.n;
+        break;
+      }
+      case 'skip':
+        if (n.n === 'fill' || n.noun === 'sp') return null;
+        w += n.n;
+        break;
+      case 'join':
+      case 'turn':
+      case 'loop':
+      case 'mark':
+        break;
+      default:
+        return null;
+    }
+  }
+  return w;
+}
+
+function sameStitch(a: Node, b: Node): boolean {
+  return a.t === 'st' && b.t === 'st' && a.entry.id === b.entry.id && (a.incOf?.id ?? null) === (b.incOf?.id ?? null);
+}
+
 /** Turns the flat list with star markers into nested repeat groups. */
 function nestStars(items: Item[], r: Reader): Node[] {
   const frames: Array<{ list: Node[]; col: number }> = [{ list: [], col: -1 }];
   // A closed *…* waiting for its "rep" clause.
   let waiting: GroupNode | null = null;
-  for (const it of items) {
+  const used = new Set<number>();
+  const fail = (message: string, col: number) => {
+    r.problems.push(error(message, col));
+    r.uncertain = true;
+    r.starTrouble = true;
+  };
+  for (let idx = 0; idx < items.length; idx++) {
+    const it = items[idx];
     switch (it.t) {
       case '*open':
         frames.push({ list: [], col: it.col });
@@ -1365,6 +1495,24 @@ function nestStars(items: Item[], r: Reader): Node[] {
       }
       case 'repfrom':
       case 'reptimes': {
+        if (it.t === 'repfrom' && it.to !== undefined) {
+          repeatToMark(it, idx);
+          waiting = null;
+          break;
+        }
+        if (it.t === 'repfrom' && it.from !== undefined) {
+          // "**sc, *inc, sc; rep from * twice; rep from ** 5 more times": everything since the "**".
+          const list = frames[frames.length - 1].list;
+          const at = markIndex(list, it.from, true);
+          if (at < 0) fail(`'rep from ${stars(it.from)}' has no '${stars(it.from)}' before it to repeat from`, it.col);
+          else {
+            used.add(it.from);
+            const body = list.splice(at);
+            list.push(starGroupOf(body, body[0].col, it.times));
+          }
+          waiting = null;
+          break;
+        }
         if (it.t === 'repfrom' && frames.length >= 2) {
           const f = frames.pop()!;
           frames[frames.length - 1].list.push(starGroupOf(f.list, f.col, it.times));
@@ -1395,9 +1543,13 @@ function nestStars(items: Item[], r: Reader): Node[] {
         }
         break;
       }
+      case 'ending':
+        ending(it);
+        waiting = null;
+        break;
       default:
         frames[frames.length - 1].list.push(it);
-        if (it.t !== 'loop' && it.t !== 'turn' && it.t !== 'join') waiting = null;
+        if (it.t !== 'loop' && it.t !== 'turn' && it.t !== 'join' && it.t !== 'mark') waiting = null;
     }
   }
   while (frames.length > 1) {
@@ -1405,22 +1557,270 @@ function nestStars(items: Item[], r: Reader): Node[] {
     r.problems.push(warning("The repeat that starts at this '*' is never repeated", f.col));
     frames[frames.length - 1].list.push(...f.list);
   }
+  for (const it of items) {
+    if (it.t === 'mark' && !used.has(it.level) && !r.starTrouble) {
+      const m = stars(it.level);
+      r.problems.push(
+        warning(`Nothing refers to this '${m}' (as in 'rep from * to ${m}' or 'ending last rep at ${m}'), so it changes nothing`, it.col),
+      );
+      used.add(it.level);
+    }
+  }
   return frames[0].list;
+
+  /** "*A**, B; rep from * to ** once": A and B are worked, then A again (common practice). */
+  function repeatToMark(it: Extract<Item, { t: 'repfrom' }>, idx: number): void {
+    const level = it.to!;
+    const m = stars(level);
+    const parent = () => frames[frames.length - 1].list;
+    let body: Node[] | null = null;
+    let col = it.col;
+    if (frames.length >= 2) {
+      // The * repeat is still open: its first pass is worked as written, then the part up to the mark.
+      const f = frames.pop()!;
+      const at = markIndex(f.list, level);
+      parent().push(...f.list);
+      if (at >= 0) {
+        body = f.list.slice(0, at);
+        col = f.col;
+      }
+    } else {
+      // "rep from * twice more, then from * to ** once": the * repeat was closed by the "rep" before.
+      const list = parent();
+      for (let i = list.length - 1; i >= 0 && !body; i--) {
+        const n = list[i];
+        if (n.t === 'group' && n.star) {
+          const at = markIndex(n.body, level);
+          if (at >= 0) {
+            body = n.body.slice(0, at);
+            col = n.col;
+          }
+        }
+      }
+    }
+    if (!body) {
+      const later = items.slice(idx + 1).some((x) => x.t === 'mark' && x.level === level);
+      fail(
+        later
+          ? `'${it.text}' comes before its '${m}', so the repeat would hold itself: put the '${m}' where the repeated part ends, before the 'rep'`
+          : `'${it.text}' has no '${m}' before it: put '${m}' where the repeated part ends`,
+        it.col,
+      );
+      return;
+    }
+    used.add(level);
+    parent().push(starGroupOf(body, col, it.times));
+  }
+
+  function ending(it: EndingItem): void {
+    const list = frames[frames.length - 1].list;
+    const g = list[list.length - 1];
+    if (!isRepeatGroup(g)) {
+      fail(`'${it.text}' follows no repeat: put it right after the 'rep from *' it changes`, it.col);
+      if (it.how !== 'at') list.push(...it.nodes);
+      return;
+    }
+    if (it.how === 'at') {
+      const at = markIndex(g.body, it.level);
+      const m = stars(it.level);
+      if (at < 0) {
+        fail(`'${it.text}' needs a '${m}' inside the repeat to say where the last repeat stops`, it.col);
+        return;
+      }
+      used.add(it.level);
+      g.last = g.body.slice(0, at);
+      return;
+    }
+    if (it.how === 'with') {
+      let li = g.body.length - 1;
+      while (li >= 0 && !isWorkingNode(g.body[li])) li--;
+      const x = it.nodes.find(isWorkingNode);
+      if (li < 0 || !x || !sameStitch(g.body[li], x)) {
+        fail(
+          `Whorlbook cannot tell which part of the last repeat '${it.text}' takes the place of: put '**' where the last repeat stops and write 'ending last rep at **', or write the last repeat out`,
+          it.col,
+        );
+        return;
+      }
+      g.last = [...g.body.slice(0, li), ...it.nodes, ...g.body.slice(li + 1)];
+      return;
+    }
+    // "rep from * across, ending with sc in last st": the repeats leave room for what ends the row.
+    if (g.times.k === 'fill') {
+      const w = staticWorks(it.nodes);
+      if (w === null) {
+        fail(`Whorlbook cannot tell how many stitches '${it.text}' needs at the end: write 'rep from * to last N sts, …' instead`, it.col);
+      } else g.times = { k: 'fill', leave: g.times.leave + w };
+    }
+    list.push(...it.nodes);
+  }
+}
+
+/**
+ * "ending last rep at **", "ending last rep with sc in next st", "ending with sc in last st, turn": reads
+ * the clause and the ones after it that belong to it (up to a ';' or '.'); returns the last clause used.
+ */
+function readEnding(clauses: Clause[], ci: number, r: Reader, out: Item[], top: boolean): number {
+  const els = clauses[ci].els;
+  const col = firstCol(els);
+  let i = 1;
+  let lastRep = false;
+  if (isWord(els[i], 'last')) {
+    lastRep = true;
+    i++;
+  }
+  if (isWord(els[i], 'rep')) {
+    lastRep = true;
+    i++;
+  }
+  if (isWord(els[i], 'at')) {
+    const run = starRun(els, i + 1);
+    const text = r.slice(col, lastEnd(els));
+    if (run >= 2 && i + 1 + run === els.length) out.push({ t: 'ending', how: 'at', level: run, col, text });
+    else {
+      const why = run === 1 ? "a single '*' starts the repeat, so it cannot say where the last one stops; " : '';
+      r.problems.push(error(`Whorlbook could not read '${text}': ${why}mark where the last repeat stops with '**' and write 'ending last rep at **'`, col));
+      r.uncertain = true;
+      r.starTrouble = true;
+    }
+    return ci;
+  }
+  if (isWord(els[i], 'with')) i++;
+  let last = ci;
+  const parts: Clause[] = [{ els: els.slice(i), sep: null }];
+  while (last + 1 < clauses.length) {
+    const next = clauses[last + 1];
+    if (!(next.sep === ',' || next.sep === 'and' || next.sep === 'then') || isEnding(next.els) || isWord(next.els[0], 'rep')) break;
+    parts.push(next);
+    last++;
+  }
+  const sub: Item[] = [];
+  for (const p of parts) if (p.els.length) readClause(p, r, sub, top);
+  const nodes = nestStars(sub, r);
+  const text = r.slice(col, lastEnd(clauses[last].els));
+  if (!nodes.some(isWorkingNode)) {
+    r.problems.push(error(`Whorlbook could not read '${text}': say what the last repeat ends with, e.g. 'ending last rep with sc in next st'`, col));
+    r.uncertain = true;
+    out.push(...nodes);
+    return last;
+  }
+  out.push({ t: 'ending', how: lastRep ? 'with' : 'after', nodes, col, text });
+  return last;
+}
+
+/** Most instructions a sequence closed by "… around" may hold and still be read as a repeat. */
+const MAX_AROUND_SEQ = 4;
+
+function isSetupItem(n: Item): boolean {
+  return n.t === 'ring' || n.t === 'loop' || n.t === 'leftover' || n.t === 'join' || n.t === 'turn';
+}
+
+/** What may come before a round's starting chain: setup, or slip stitches that move into place. */
+function isLeadItem(n: Item): boolean {
+  return isSetupItem(n) || (n.t === 'st' && n.entry.id === 'sl st');
+}
+
+/** What may sit in a short sequence repeated around: fixed stitches, chains, skips and groups. */
+function inSequence(n: Item): boolean {
+  if (n.t === 'st') {
+    return n.entry.id !== 'sl st' && n.units.u === 'n' && !n.bareFill && (n.into.t === 'next' || n.into.t === 'same' || n.into.t === 'air');
+  }
+  if (n.t === 'group') return n.times.k === 'n' && (!n.into || n.units.u === 'n') && !n.around && !n.last;
+  return n.t === 'skip' && n.n !== 'fill' && n.noun !== 'sp';
+}
+
+function sameUnit(a: Node, b: StNode): boolean {
+  return a.t === 'st' && a.entry.id === b.entry.id && a.per === b.per && a.into.t === b.into.t && (a.incOf?.id ?? null) === (b.incOf?.id ?? null);
+}
+
+/**
+ * "sc, dec around", "sc 2, inc around": the short sequence before "around" is repeated around (common
+ * practice). Read either way and settled by the count (see AroundInfo). Returns whether it rewrote items.
+ */
+function aroundSequence(items: Item[], from: number, before: number, r: Reader): boolean {
+  const fill = items[before];
+  if (!fill || fill.t !== 'st' || !fill.bareFill) return false;
+  for (let k = before + 1; k < items.length; k++) if (items[k].t !== 'turn') return false;
+  let s = from;
+  let chain = false;
+  for (; s < before; s++) {
+    const n = items[s];
+    if (isSetupItem(n)) continue;
+    // A first chain is the round's starting chain, not part of the sequence.
+    if (!chain && n.t === 'st' && n.entry.id === 'ch' && items.slice(0, s).every(isLeadItem)) {
+      chain = true;
+      continue;
+    }
+    break;
+  }
+  const seq = items.slice(s, before) as Node[];
+  if (!seq.length || seq.length > MAX_AROUND_SEQ || !seq.every(inSequence)) return false;
+  if (seq.every((n) => sameUnit(n, fill))) return false;
+  const shaping = fill.entry.works !== fill.entry.makes || fill.entry.kind === 'inc' || fill.entry.kind === 'dec';
+  const id = r.alt(2);
+  // An inc or dec closing the sequence is read as the repeat unless the stated count says otherwise; a
+  // plain stitch ("2 sc in first st, sc around") as the rest of the round unless the count says otherwise.
+  if (shaping) r.statedOnly.push(id);
+  const seqCol = (seq[0] as { col: number }).col;
+  const text = r.slice(seqCol, fill.end);
+  const seqText = text.replace(/[\s,]*(rep\w*\s+)?(each\s+)?(around|across|remaining(\s+\w+)?|to\s+(the\s+)?end|to\s+last\b.*)$/i, '');
+  const unit: StNode = { ...fill, units: { u: 'n', n: 1 } };
+  delete unit.bareFill;
+  const g: GroupNode = {
+    t: 'group',
+    body: [...seq, unit],
+    into: null,
+    units: { u: 'n', n: 1 },
+    times: { k: 'fill', leave: fill.units.u === 'fillTo' ? fill.units.leave : 0 },
+    col: seqCol,
+    end: fill.end,
+    display: text,
+    loop: null,
+    around: { id, repeatFirst: shaping, literal: [...seq, fill], text, seq: seqText },
+  };
+  items.splice(s, before + 1 - s, g);
+  return true;
 }
 
 function readSeq(els: El[], r: Reader, top: boolean): Node[] {
   const clauses = splitClauses(els);
   const items: Item[] = [];
-  for (const cl of clauses) readClause(cl, r, items, top);
+  // Where the sequence a closing "… around" may repeat starts: after a ';' or '.', or anything else.
+  let seqFrom = 0;
+  for (let ci = 0; ci < clauses.length; ci++) {
+    const cl = clauses[ci];
+    if (cl.sep === ';' || cl.sep === '.' || cl.sep === ':') seqFrom = items.length;
+    if (isEnding(cl.els)) {
+      ci = readEnding(clauses, ci, r, items, top);
+      seqFrom = items.length;
+      continue;
+    }
+    const before = items.length;
+    readClause(cl, r, items, top);
+    if (!top || items.length === before) continue;
+    if (aroundSequence(items, seqFrom, before, r)) {
+      seqFrom = items.length;
+      continue;
+    }
+    for (let k = before; k < items.length; k++) if (!inSequence(items[k]) && !isSetupItem(items[k])) seqFrom = k + 1;
+  }
   const nodes = nestStars(items, r);
   settleChains(nodes, r, top);
   return nodes;
 }
 
+/** Every node list a group may work: its body, its last time through, its literal reading. */
+function groupLists(g: GroupNode): Node[][] {
+  const lists = [g.body];
+  if (g.last) lists.push(g.last);
+  if (g.around) lists.push(g.around.literal);
+  return lists;
+}
+
 function hasFromHook(nodes: Node[]): boolean {
   for (const n of nodes) {
     if (n.t === 'st' && n.into.t === 'fromHook') return true;
-    if (n.t === 'group' && hasFromHook(n.body)) return true;
+    if (n.t === 'group' && groupLists(n).some(hasFromHook)) return true;
   }
   return false;
 }
@@ -1430,22 +1830,44 @@ function defaultChains(nodes: Node[]): void {
   for (const n of nodes) {
     if (n.t === 'st' && n.entry.id === 'ch' && !n.role && !n.roleAlt) n.role = 'chains';
     if (n.t === 'st' && n.role === 'counts' && !n.countsAs) n.countsAs = STITCH_BY_ID.get('dc');
-    if (n.t === 'group') defaultChains(n.body);
+    if (n.t === 'group') for (const list of groupLists(n)) defaultChains(list);
   }
 }
 
 /** "dc in 4th ch from hook": do the skipped chains count as a stitch? Settled by the count. */
 function markSkippedChains(nodes: Node[], r: Reader): void {
   for (const n of nodes) {
-    if (n.t === 'st' && n.into.t === 'fromHook' && n.into.nth >= 3) n.skippedCountAlt = { id: r.alt(2), defaultCounts: n.into.nth >= 4 };
-    if (n.t === 'group') markSkippedChains(n.body, r);
+    // A node may sit in a repeat's body and its last time through: one ambiguity, not two.
+    if (n.t === 'st' && n.into.t === 'fromHook' && n.into.nth >= 3 && !n.skippedCountAlt) {
+      n.skippedCountAlt = { id: r.alt(2), defaultCounts: n.into.nth >= 4 };
+    }
+    if (n.t === 'group') for (const list of groupLists(n)) markSkippedChains(list, r);
   }
+}
+
+/**
+ * "sl st in next 2 dc and in next ch-2 sp, ch 3 (counts as dc), …": slip stitches that open a round and
+ * are followed by its starting chain only move the yarn into place; they are not stitches of the round
+ * (common practice).
+ */
+function markMovingSlips(nodes: Node[]): void {
+  let i = 0;
+  while (i < nodes.length && (nodes[i].t === 'loop' || nodes[i].t === 'mark')) i++;
+  const from = i;
+  for (; i < nodes.length; i++) {
+    const n = nodes[i];
+    if (n.t !== 'st' || n.entry.id !== 'sl st' || n.units.u !== 'n' || (n.into.t !== 'next' && n.into.t !== 'space')) break;
+  }
+  const next = nodes[i];
+  if (i === from || !next || next.t !== 'st' || next.entry.id !== 'ch') return;
+  for (let k = from; k < i; k++) (nodes[k] as StNode).moving = true;
 }
 
 /** Decides what each chain is for: turning, counting as a stitch, chain stitches, foundation or ring. */
 function settleChains(nodes: Node[], r: Reader, top: boolean): void {
+  if (top) markMovingSlips(nodes);
   const fromHook = hasFromHook(nodes);
-  const firstIdx = nodes.findIndex(isWorkNode);
+  const firstIdx = nodes.findIndex(isCountedWork);
   for (let i = 0; i < nodes.length; i++) {
     const n = nodes[i];
     if (n.t !== 'st' || n.entry.id !== 'ch') continue;
@@ -1573,6 +1995,7 @@ function parseUncached(text: string, from: number, terms: Terms): Parsed {
     problems: r.problems,
     notes: r.notes,
     alts: r.alts,
+    statedOnly: r.statedOnly,
     repRound: r.repRound,
     empty: !hasWork && !r.repRound,
     uncertain: r.uncertain,

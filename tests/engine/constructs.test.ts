@@ -416,11 +416,14 @@ describe('chain spaces', () => {
   it('in next ch-N sp works the N chains', () => {
     clean('Rnd 4: sc in next st, 3 sc in next ch-3 sp, sc in next 2 (6)', 6, 6);
   });
-  it("'in each ch-sp around' is flagged for a hand check, not guessed", () => {
+  it("with no round before it to count spaces from, 'in each ch-sp around' is flagged for a hand check, not guessed", () => {
     const r = round('Rnd 4: sl st in next ch-2 sp, ch 1, (sc, ch 2, sc) in each ch-2 sp around, join (48)', 36);
     expect(r.stitches).toBe(48);
     expect(r.problems.map((p) => [p.message, p.severity])).toEqual([
-      ["Whorlbook does not count 'in each ch-sp around' yet; check this round by hand", 'warning'],
+      [
+        "Whorlbook counts 'in each ch-sp' from the chain spaces of the round before, but there is no round before this line to count them from; check this round by hand",
+        'warning',
+      ],
     ]);
   });
 });
