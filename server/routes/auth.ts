@@ -3,6 +3,8 @@ import type { AppContext } from '../context.js';
 import { validate } from '../middleware/validate.js';
 import { currentUser, requireUser } from '../middleware/require-user.js';
 import {
+  ChangeEmailSchema,
+  ConfirmEmailChangeSchema,
   DeleteAccountSchema,
   PasswordChangeSchema,
   PasswordResetConfirmSchema,
@@ -10,6 +12,7 @@ import {
   SignInSchema,
   SignUpSchema,
   VerifyEmailSchema,
+  type ChangeEmailInput,
   type DeleteAccountInput,
   type PasswordChangeInput,
   type PasswordResetConfirmInput,
@@ -21,9 +24,12 @@ import {
 import { checkCredentials, startSession } from '../services/auth.js';
 import {
   RESET_REQUESTED,
+  EMAIL_CHANGE_SENT,
   changePassword,
+  confirmEmailChange,
   confirmPasswordReset,
   deleteAccount,
+  requestEmailChange,
   requestPasswordReset,
   resendVerification,
   signUp,
@@ -98,6 +104,17 @@ export function authRouter(ctx: AppContext) {
   router.post('/auth/password', requireUser, limit.passwordChangeAccount, validate({ body: PasswordChangeSchema }), async (req, res) => {
     await changePassword(ctx, currentUser(res).id, res.locals.session!.id, req.body as PasswordChangeInput, publicOrigin(ctx.env, req));
     res.json({ ok: true, message: 'Your password is changed. Other devices were signed out; this one stays signed in.' });
+  });
+
+  // A link goes to the new address; the account changes only when it is opened (answered the same either way).
+  router.post('/auth/email', requireUser, limit.passwordChangeAccount, validate({ body: ChangeEmailSchema }), async (req, res) => {
+    const email = await requestEmailChange(ctx, currentUser(res).id, req.body as ChangeEmailInput, publicOrigin(ctx.env, req));
+    res.status(202).json({ ok: true, message: EMAIL_CHANGE_SENT(email) });
+  });
+
+  router.post('/auth/email/confirm', validate({ body: ConfirmEmailChangeSchema }), async (req, res) => {
+    const { email } = await confirmEmailChange(ctx, (req.body as VerifyEmailInput).token);
+    res.json({ ok: true, email, message: `Done: you now sign in with ${email}.` });
   });
 
   // The password is asked again (and rate limited like a password change); the session cookie goes with the account.

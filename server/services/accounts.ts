@@ -5,18 +5,19 @@ import { HttpError } from '../lib/http-error.js';
 import { renderMail, tokenLink } from '../lib/mail-template.js';
 import type { MailMessage } from '../lib/mail.js';
 import { hashPassword, verifyPassword } from '../lib/password.js';
-import { createUser, findUserByEmail, type UserRow } from './users.js';
-import type { DeleteAccountInput, PasswordChangeInput, SignUpInput } from '../../src/schemas/auth.js';
+import { createUser, findUserByEmail, normalizeEmail, type UserRow } from './users.js';
+import type { ChangeEmailInput, DeleteAccountInput, PasswordChangeInput, SignUpInput } from '../../src/schemas/auth.js';
 import { deleteProjectPhotoFiles } from '../lib/storage.js';
 
 // Guidance followed here: OWASP Authentication Cheat Sheet and Forgot Password Cheat Sheet (random single-use
 // tokens stored hashed, short expiry, the same answer whether or not an account exists, no automatic sign-in
 // after a reset, a notice e-mail after a change) and NIST SP 800-63B §5.1.1 (length rules live in src/schemas/auth.ts).
 
-export type TokenPurpose = 'verify_email' | 'reset_password';
+export type TokenPurpose = 'verify_email' | 'reset_password' | 'change_email';
 export const TOKEN_TTL_MS: Record<TokenPurpose, number> = {
   verify_email: 48 * 60 * 60 * 1000,
   reset_password: 60 * 60 * 1000,
+  change_email: 24 * 60 * 60 * 1000,
 };
 
 export const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
@@ -32,14 +33,17 @@ interface TokenRow {
   used_at: number | null;
 }
 
-/** A fresh 32-byte random token; only its SHA-256 is stored. Returns the token to put in the link. */
-export async function issueToken(db: Knex, user: Pick<UserRow, 'id' | 'email'>, purpose: TokenPurpose): Promise<string> {
+/**
+ * A fresh 32-byte random token; only its SHA-256 is stored. Returns the token to put in the link. `email` is the
+ * address the link goes to (for an address change, the new one).
+ */
+export async function issueToken(db: Knex, user: Pick<UserRow, 'id' | 'email'>, purpose: TokenPurpose, email = user.email): Promise<string> {
   const token = randomBytes(32).toString('base64url');
   await db('auth_tokens').insert({
     user_id: user.id,
     purpose,
     token_hash: hashToken(token),
-    email: user.email,
+    email,
     expires_at: Date.now() + TOKEN_TTL_MS[purpose],
   });
   return token;
@@ -50,6 +54,11 @@ const TOKEN_PROBLEM: Record<TokenPurpose, { unknown: string; used: string; expir
     unknown: 'This confirmation link is not valid. Open the newest link from your e-mail, or ask for a new one.',
     used: 'This confirmation link was already used. If your address still shows as unconfirmed, ask for a new link.',
     expired: 'This confirmation link has expired (links last 48 hours). Sign in and ask for a new one.',
+  },
+  change_email: {
+    unknown: 'This link to change your e-mail is not valid. Open the newest one, or ask again from the Me page.',
+    used: 'This link to change your e-mail was already used. Sign in with the address it changed to.',
+    expired: 'This link to change your e-mail has expired (links last 24 hours). Ask again from the Me page.',
   },
   reset_password: {
     unknown: 'This reset link is not valid. Ask for a new one from "Forgot your password?".',
@@ -238,7 +247,7 @@ function accountDeletedMail(user: Pick<UserRow, 'email' | 'display_name'>, origi
       greeting: `Hello ${user.display_name},`,
       paragraphs: [
         `Your Whorlbook account was deleted (${new Date().toUTCString()}), with its patterns, projects, counts, journal, photos, comments and shared pages.`,
-        'If you did not ask for this, someone had your password: reply to this message. You are welcome to sign up again at any time.',
+        'If you did not ask for this, someone had your password: tell the people who run this Whorlbook straight away. You are welcome to sign up again at any time.',
       ],
       action: { label: 'Open Whorlbook', url: new URL('/', origin).toString() },
     }),
@@ -269,4 +278,86 @@ export async function deleteAccount(ctx: AppContext, userId: string, input: Dele
   });
   for (const id of projectIds) await deleteProjectPhotoFiles(ctx, id);
   void deliver(ctx, accountDeletedMail(user, origin));
+}
+
+export const EMAIL_CHANGE_SENT = (email: string) =>
+  `We sent a link to ${email}. Your sign-in address changes when you open it (within 24 hours); until then it stays as it is.`;
+
+/**
+ * Starts a change of sign-in address: after the password, a link goes to the new address, which changes only when
+ * that link is opened. The answer is the same whether or not the new address already has an account (that
+ * address hears about it instead), so this cannot be used to find out who is a member.
+ */
+export async function requestEmailChange(ctx: AppContext, userId: string, input: ChangeEmailInput, origin: string) {
+  const user = await ctx.db<UserRow>('users').where({ id: userId }).first();
+  if (!user) throw new HttpError(401, 'Please sign in to continue.');
+  if (!(await verifyPassword(user.password_hash, input.password))) {
+    throw new HttpError(403, 'That is not your password.', [{ path: 'password', message: 'That is not your password.' }]);
+  }
+  const email = normalizeEmail(input.email);
+  if (email === user.email) {
+    throw new HttpError(422, 'That is already your e-mail address.', [{ path: 'email', message: 'That is already your e-mail address.' }]);
+  }
+  const taken = await findUserByEmail(ctx.db, email);
+  if (taken) {
+    void deliver(ctx, {
+      to: email,
+      subject: 'Someone tried to use this address on Whorlbook',
+      ...renderMail({
+        greeting: 'Hello,',
+        paragraphs: [
+          'A Whorlbook member asked to move their account to this e-mail address, but this address already has a Whorlbook account, so nothing changed.',
+          'If that was you, sign in with this address instead, or delete one of the two accounts from its Me page first.',
+        ],
+        action: { label: 'Open Whorlbook', url: new URL('/sign-in', origin).toString() },
+      }),
+    });
+    return email;
+  }
+  const token = await issueToken(ctx.db, user, 'change_email', email);
+  void deliver(ctx, {
+    to: email,
+    subject: 'Confirm your new e-mail for Whorlbook',
+    ...renderMail({
+      greeting: `Hello ${user.display_name},`,
+      paragraphs: [
+        'You asked to sign in to Whorlbook with this address from now on. Open the link below to make the change.',
+        'The link works once and lasts 24 hours. Until then you still sign in with your current address.',
+      ],
+      action: { label: 'Use this e-mail', url: tokenLink(origin, '/change-email', token) },
+      footer: 'If you did not ask for this, ignore this e-mail and nothing will change.\n\nWhorlbook',
+    }),
+  });
+  return email;
+}
+
+/**
+ * Opens the link sent to the new address: the account's address becomes it (and counts as confirmed, since the
+ * link proves it), other links still out for the old address stop working, and the old address is told.
+ */
+export async function confirmEmailChange(ctx: AppContext, token: string) {
+  const { user, email } = await ctx.db.transaction(async (trx) => {
+    const row = await consumeToken(trx, token, 'change_email');
+    const user = await trx<UserRow>('users').where({ id: row.user_id }).first();
+    if (!user || user.disabled_at) throw new HttpError(400, TOKEN_PROBLEM.change_email.unknown);
+    const taken = await trx<UserRow>('users').where({ email: row.email }).whereNot({ id: user.id }).first();
+    if (taken) throw new HttpError(409, 'That address got its own Whorlbook account meanwhile, so your address stays as it is.');
+    const now = nowIso();
+    await trx('users').where({ id: user.id }).update({ email: row.email, email_verified_at: now, updated_at: now });
+    // Reset and verification links, and other address changes, were for the old state of the account.
+    await trx('auth_tokens').where({ user_id: user.id }).whereNull('used_at').update({ used_at: Date.now() });
+    return { user, email: row.email };
+  });
+  void deliver(ctx, {
+    to: user.email,
+    subject: 'Your Whorlbook e-mail was changed',
+    ...renderMail({
+      greeting: `Hello ${user.display_name},`,
+      paragraphs: [
+        `Your Whorlbook account now signs in with ${email} instead of this address (${new Date().toUTCString()}).`,
+        'If that was you, there is nothing more to do. If it was not, someone has your password: tell the people who run this Whorlbook straight away.',
+      ],
+    }),
+  });
+  return { email };
 }

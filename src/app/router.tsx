@@ -17,6 +17,7 @@ const publicScreens: RouteObject[] = [
   { path: '/forgot-password', ...screen(() => import('./routes/forgot-password')) },
   { path: '/reset-password', ...screen(() => import('./routes/reset-password')) },
   { path: '/verify-email', ...screen(() => import('./routes/verify-email')) },
+  { path: '/change-email', ...screen(() => import('./routes/change-email')) },
   { path: '/dev/outbox', ...screen(() => import('./routes/dev-outbox')) },
 ];
 

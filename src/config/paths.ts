@@ -6,6 +6,7 @@ export const paths = {
   forgotPassword: '/forgot-password',
   resetPassword: '/reset-password',
   verifyEmail: '/verify-email',
+  changeEmail: '/change-email',
   account: '/account',
   admin: '/admin',
   outbox: '/dev/outbox',

@@ -78,6 +78,14 @@ export const PasswordChangeSchema = z
   .refine((v) => v.current !== v.next, { path: ['next'], message: 'Choose a new password that differs from the current one.' });
 export type PasswordChangeInput = z.infer<typeof PasswordChangeSchema>;
 
+// Changing the sign-in address: the new address, and the password again (OWASP: re-authenticate first).
+export const ChangeEmailSchema = z.object({
+  email: z.string().trim().pipe(EmailSchema),
+  password: z.string().min(1, { message: 'Enter your password to confirm.' }).max(256),
+});
+export type ChangeEmailInput = z.infer<typeof ChangeEmailSchema>;
+export const ConfirmEmailChangeSchema = z.object({ token: TokenSchema });
+
 // Deleting one's own account asks for the password again, so an unattended signed-in phone cannot do it.
 export const DeleteAccountSchema = z.object({
   password: z.string().min(1, { message: 'Enter your password to confirm.' }).max(256),

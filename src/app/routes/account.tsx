@@ -6,6 +6,7 @@ import { useMe } from '@/features/auth/api/get-me';
 import { useResendVerification } from '@/features/auth/api/resend-verification';
 import { ChangePasswordForm } from '@/features/auth/components/change-password-form';
 import { DeleteAccountForm } from '@/features/auth/components/delete-account-form';
+import { ChangeEmailForm } from '@/features/auth/components/change-email-form';
 
 function EmailStatus({ verified }: { verified: boolean }) {
   const resend = useResendVerification();
@@ -72,7 +73,11 @@ export default function AccountRoute() {
           <h2 className="mb-3 text-xl font-bold">Change your password</h2>
           <ChangePasswordForm />
         </Card>
-        <Card className="lg:col-span-2">
+        <Card>
+          <h2 className="mb-3 text-xl font-bold">Change your e-mail</h2>
+          <ChangeEmailForm />
+        </Card>
+        <Card>
           <h2 className="mb-3 text-xl font-bold">Delete your account</h2>
           <DeleteAccountForm />
         </Card>
