@@ -123,3 +123,32 @@ test('an admin disables a member from the members table and that member is signe
     await memberContext.close();
   }
 });
+
+test('change the sign-in e-mail through the link in the outbox, then delete the account', async ({ page }) => {
+  const member = createMember('Moving maker');
+  const moved = `e2e-moved-${Date.now()}@example.com`;
+  await signIn(page, member);
+  await page.goto('/account');
+  await page.getByLabel('New e-mail').fill(moved);
+  await page.getByLabel('Password', { exact: true }).fill(member.password);
+  await page.getByRole('button', { name: 'Send the link' }).click();
+  await expect(page.getByText(`We sent a link to ${moved}.`, { exact: false })).toBeVisible();
+  // Nothing changes until the link is opened.
+  await expect(page.getByText(member.email)).toBeVisible();
+
+  await openMailedLink(page, moved, /Confirm your new e-mail/, '/change-email');
+  await expect(page.getByText(`Done: you now sign in with ${moved}.`)).toBeVisible();
+  await page.getByRole('link', { name: 'Go to Me' }).click();
+  await expect(page.getByText(moved)).toBeVisible();
+
+  // Leaving: the password, one more question, then the sign-in page; the account no longer signs in.
+  await page.getByLabel('Your password').fill(member.password);
+  await page.getByRole('button', { name: 'Delete my account' }).click();
+  await page.getByRole('dialog').getByRole('button', { name: 'Delete everything' }).click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  await page.getByLabel('E-mail').fill(moved);
+  await page.getByLabel('Password', { exact: true }).fill(member.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page.getByRole('alert').first()).toBeVisible();
+  await expect(page).toHaveURL(/\/sign-in/);
+});
