@@ -8,9 +8,12 @@ import {
   CreateReportSchema,
   ReportListQuerySchema,
   ResolveReportSchema,
+  ShareCommentParamsSchema,
   ShareSettingsSchema,
+  ShareTokenParamsSchema as TokenParams,
   UpdateCommentSchema,
   type CreateReportInput,
+  type ShareCommentParams,
 } from '../../src/schemas/share.js';
 import { HttpError } from '../lib/http-error.js';
 import { currentUser, requireRole, requireUser } from '../middleware/require-user.js';
@@ -22,7 +25,6 @@ import { createReport, listReports, resolveReport } from '../services/reports.js
 import { getShareSettings, makerProfile, rotateShareToken, shareStatus, showcaseView, updateShareSettings } from '../services/share.js';
 
 type IdParams = z.infer<typeof IdParamsSchema>;
-const TokenParams = z.object({ token: z.string().max(100) });
 const MakerParams = z.object({ makerId: z.string().max(100) });
 
 /**
@@ -125,18 +127,20 @@ export function shareRouter(ctx: AppContext) {
     res.json({ cheers: await removeCheer(db, String(req.params.token), currentUser(res)) });
   });
 
-  router.delete('/comments/:id', requireUser, validate({ params: IdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as IdParams;
-    await deleteComment(db, id, currentUser(res));
+  // A comment is reached only through the page it is on (its link), never by id alone: see services/comments.ts.
+  router.delete('/share/:token/comments/:id', requireUser, validate({ params: ShareCommentParamsSchema }), async (req, res) => {
+    const { token, id } = req.params as unknown as ShareCommentParams;
+    await deleteComment(db, token, id, currentUser(res));
     res.status(204).end();
   });
 
-  router.patch('/comments/:id', requireUser, validate({ params: IdParamsSchema, body: UpdateCommentSchema }), async (req, res) => {
-    const { id } = req.params as unknown as IdParams;
+  router.patch('/share/:token/comments/:id', requireUser, validate({ params: ShareCommentParamsSchema, body: UpdateCommentSchema }), async (req, res) => {
+    const { token, id } = req.params as unknown as ShareCommentParams;
     const { hidden } = req.body as z.infer<typeof UpdateCommentSchema>;
-    res.json({ comment: await setCommentHidden(db, id, currentUser(res), hidden) });
+    res.json({ comment: await setCommentHidden(db, token, id, currentUser(res), hidden) });
   });
 
+  // The body always carries the page's link token, with a comment id when the report is about one comment on it.
   router.post('/reports', (_req, res, next) => {
     if (!res.locals.user) throw new HttpError(401, 'Please sign in to report something, so the admins can reach you if they need to.');
     next();

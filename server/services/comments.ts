@@ -3,7 +3,7 @@ import type { User } from 'lucia';
 import type { AppContext } from '../context.js';
 import { HttpError, notFound } from '../lib/http-error.js';
 import { renderMail } from '../lib/mail-template.js';
-import { absoluteUrl, isShowcaseOpen, sharePath, sharedProjectByToken } from './share.js';
+import { absoluteUrl, sharePath, sharedProjectByToken } from './share.js';
 import type { ShowcaseComment as CommentOut } from '../../src/types/showcase.js';
 
 export type { CommentOut };
@@ -96,30 +96,33 @@ async function notifyOwner(ctx: AppContext, project: Row, author: User, body: st
   }
 }
 
-/** The comment with its page's owner, or 404 when the member may not even see it. */
-async function commentForMember(db: Knex, commentId: number, userId: string) {
-  const row = await db('comments as c').join('projects as p', 'p.id', 'c.project_id').where('c.id', commentId).first('c.*', 'p.owner_id');
+/**
+ * The comment, found only through the page it is on: the link must open a page this visitor may see, and the
+ * comment must belong to that page's project. An unknown id, a comment on another page (unlisted ones included) and
+ * a hidden comment the member is not involved in all get the same 404, so stepping through ids reveals nothing.
+ */
+async function commentOnPage(db: Knex, token: string, commentId: number, userId: string) {
+  const project = await sharedProjectByToken(db, token);
+  const row = await db('comments').where({ id: commentId, project_id: project.id }).first();
   if (!row) throw notFound(COMMENT);
-  const involved = row.author_id === userId || row.owner_id === userId;
-  if (!involved) {
-    // Someone who can see the comment on an open page learns why they cannot change it; anyone else learns nothing.
-    const visible = !row.hidden_at && (await isShowcaseOpen(db, row.project_id));
-    if (!visible) throw notFound(COMMENT);
-  }
-  return row;
+  const ownerId: string = project.owner_id;
+  const involved = row.author_id === userId || ownerId === userId;
+  // Someone who can read the comment on this page learns why they cannot change it; a hidden one they cannot read.
+  if (!involved && row.hidden_at) throw notFound(COMMENT);
+  return { row, ownerId };
 }
 
-export async function deleteComment(db: Knex, commentId: number, user: User) {
-  const row = await commentForMember(db, commentId, user.id);
-  if (row.author_id !== user.id && row.owner_id !== user.id) {
+export async function deleteComment(db: Knex, token: string, commentId: number, user: User) {
+  const { row, ownerId } = await commentOnPage(db, token, commentId, user.id);
+  if (row.author_id !== user.id && ownerId !== user.id) {
     throw new HttpError(403, 'Only the person who wrote a comment, or the owner of the page, can delete it. Use "Report" if something is wrong with it.');
   }
   await db('comments').where({ id: row.id }).delete();
 }
 
-export async function setCommentHidden(db: Knex, commentId: number, user: User, hidden: boolean) {
-  const row = await commentForMember(db, commentId, user.id);
-  if (row.owner_id !== user.id) {
+export async function setCommentHidden(db: Knex, token: string, commentId: number, user: User, hidden: boolean) {
+  const { row, ownerId } = await commentOnPage(db, token, commentId, user.id);
+  if (ownerId !== user.id) {
     throw new HttpError(403, 'Only the owner of the page can hide a comment. Use "Report" if something is wrong with it.');
   }
   if (!hidden && row.hidden_at && row.hidden_by !== user.id) {
@@ -129,5 +132,5 @@ export async function setCommentHidden(db: Knex, commentId: number, user: User, 
     .where({ id: row.id })
     .update(hidden ? { hidden_at: row.hidden_at ?? new Date().toISOString(), hidden_by: row.hidden_by ?? user.id } : { hidden_at: null, hidden_by: null });
   const updated = await commentQuery(db).where('c.id', row.id).first();
-  return toComment(updated, user.id, row.owner_id);
+  return toComment(updated, user.id, ownerId);
 }

@@ -2,25 +2,28 @@ import type { Knex } from 'knex';
 import type { User } from 'lucia';
 import { HttpError, notFound } from '../lib/http-error.js';
 import type { CreateReportInput } from '../../src/schemas/share.js';
-import { isShowcaseOpen, sharePath, sharedProjectByToken } from './share.js';
+import { sharePath, sharedProjectByToken } from './share.js';
 import type { Report as ReportOut } from '../../src/types/showcase.js';
 
 export type { ReportOut };
 
-// Reports of a comment or a whole showcase page. Members report what they can see; admins hide or dismiss.
+// Reports of a comment or a whole showcase page, always reached through the page's link. Members report what they
+// can see; admins hide or dismiss.
 
 type Row = Record<string, any>;
 
 
 export async function createReport(db: Knex, user: User, input: CreateReportInput) {
+  // The page first: a link that does not open a page this member may see is "not found", whatever the comment id.
+  const project = await sharedProjectByToken(db, input.shareToken);
   let target: { target: 'comment' | 'project'; comment_id: number | null; project_id: number };
   if (input.commentId !== undefined) {
-    const comment = await db('comments').where({ id: input.commentId }).first();
-    // Only what the member can see can be reported; anything else is "not found", so ids reveal nothing.
-    if (!comment || comment.hidden_at || !(await isShowcaseOpen(db, comment.project_id))) throw notFound('That comment');
-    target = { target: 'comment', comment_id: comment.id, project_id: comment.project_id };
+    // Only a comment the member can read on this very page can be reported. An unknown id, one from another page
+    // and a hidden one get the same 404, so ids reveal nothing.
+    const comment = await db('comments').where({ id: input.commentId, project_id: project.id }).whereNull('hidden_at').first('id');
+    if (!comment) throw notFound('That comment');
+    target = { target: 'comment', comment_id: comment.id, project_id: project.id };
   } else {
-    const project = await sharedProjectByToken(db, input.shareToken!);
     target = { target: 'project', comment_id: null, project_id: project.id };
   }
   // Reporting the same thing twice while the first report is open adds nothing for the admins to read.

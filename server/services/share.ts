@@ -75,19 +75,6 @@ export async function sharedProjectByToken(db: Knex, token: string): Promise<Row
   return row;
 }
 
-/** True when a visitor may see this project's page (used for comments and reports reached by id). */
-export async function isShowcaseOpen(db: Knex, projectId: number): Promise<boolean> {
-  const row = await db('projects as p')
-    .join('users as u', 'u.id', 'p.owner_id')
-    .where('p.id', projectId)
-    .whereNotNull('p.share_token')
-    .whereIn('p.visibility', ['link', 'public'])
-    .whereNull('p.showcase_hidden_at')
-    .whereNull('u.disabled_at')
-    .first('p.id');
-  return Boolean(row);
-}
-
 // ---- The public view ---------------------------------------------------------------------------------------
 
 

@@ -28,6 +28,16 @@ export const CommentBodySchema = z
 export const CreateCommentSchema = z.object({ body: CommentBodySchema }).strict();
 export type CreateCommentInput = z.infer<typeof CreateCommentSchema>;
 
+// The token in a path is only bounded here; a malformed one gets the same 404 as an unknown one, from the service.
+const PathToken = z.string().max(100);
+export const ShareTokenParamsSchema = z.object({ token: PathToken });
+/** A comment is addressed only through its page's link, /share/:token/comments/:id, never by id alone. */
+export const ShareCommentParamsSchema = z.object({
+  token: PathToken,
+  id: z.coerce.number({ message: 'That id is not a number.' }).int().positive(),
+});
+export type ShareCommentParams = z.infer<typeof ShareCommentParamsSchema>;
+
 export const UpdateCommentSchema = z.object({ hidden: z.boolean({ message: 'Say whether the comment is hidden (true or false).' }) }).strict();
 
 const Reason = z
@@ -36,18 +46,17 @@ const Reason = z
   .min(3, { message: 'Say in a few words what is wrong.' })
   .max(REPORT_REASON_MAX, { message: `Keep the reason under ${REPORT_REASON_MAX} characters.` });
 
-/** A report names either one comment or one shared page (by its link token), never both. */
+/**
+ * A report always names the page by its link token; with a comment id it is about that comment on that page. A
+ * comment is only ever reached through the page it is on, so an id alone (from another page, or guessed) finds nothing.
+ */
 export const CreateReportSchema = z
   .object({
-    commentId: z.number().int().positive().optional(),
-    shareToken: z.string().min(1).max(100).optional(),
+    shareToken: z.string({ message: 'Say which page this is about (its link).' }).min(1, { message: 'Say which page this is about (its link).' }).max(100),
+    commentId: z.number({ message: 'That comment id is not a number.' }).int().positive().optional(),
     reason: Reason,
   })
-  .strict()
-  .refine((v) => (v.commentId === undefined) !== (v.shareToken === undefined), {
-    message: 'Report either one comment or one page.',
-    path: ['commentId'],
-  });
+  .strict();
 export type CreateReportInput = z.infer<typeof CreateReportSchema>;
 
 export const ReportFormSchema = z.object({ reason: Reason });

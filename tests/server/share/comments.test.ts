@@ -98,7 +98,7 @@ describe('deleting and hiding', () => {
 
   it('the author can delete their own comment', async () => {
     const { author, p, id } = await setUp();
-    expect((await author.agent.delete(`/api/comments/${id}`)).status).toBe(204);
+    expect((await author.agent.delete(`/api/share/${p.token}/comments/${id}`)).status).toBe(204);
     expect((await request(t.app).get(`/api/share/${p.token}/comments`)).body.comments).toEqual([]);
   });
 
@@ -106,24 +106,24 @@ describe('deleting and hiding', () => {
     const { owner, p, id } = await setUp();
     const asOwner = await owner.agent.get(`/api/share/${p.token}/comments`);
     expect(asOwner.body.comments[0]).toMatchObject({ canDelete: true, canHide: true, mine: false });
-    expect((await owner.agent.delete(`/api/comments/${id}`)).status).toBe(204);
+    expect((await owner.agent.delete(`/api/share/${p.token}/comments/${id}`)).status).toBe(204);
     expect(await t.db('comments').where({ id }).first()).toBeUndefined();
   });
 
   it('anyone else gets 403 (and a visitor 401); an unknown id is 404', async () => {
-    const { stranger, id } = await setUp();
-    const res = await stranger.agent.delete(`/api/comments/${id}`);
+    const { stranger, p, id } = await setUp();
+    const res = await stranger.agent.delete(`/api/share/${p.token}/comments/${id}`);
     expect(res.status).toBe(403);
     expect(res.body.error).toMatch(/Only the person who wrote/);
-    expect((await stranger.agent.patch(`/api/comments/${id}`).send({ hidden: true })).status).toBe(403);
-    expect((await request(t.app).delete(`/api/comments/${id}`)).status).toBe(401);
-    expect((await stranger.agent.delete('/api/comments/999999')).status).toBe(404);
+    expect((await stranger.agent.patch(`/api/share/${p.token}/comments/${id}`).send({ hidden: true })).status).toBe(403);
+    expect((await request(t.app).delete(`/api/share/${p.token}/comments/${id}`)).status).toBe(401);
+    expect((await stranger.agent.delete(`/api/share/${p.token}/comments/999999`)).status).toBe(404);
     expect(await t.db('comments').where({ id }).first()).toBeDefined();
   });
 
   it('the owner can hide a comment: gone for everyone else, marked hidden for the owner, and can show it again', async () => {
     const { owner, author, p, id } = await setUp();
-    const hid = await owner.agent.patch(`/api/comments/${id}`).send({ hidden: true });
+    const hid = await owner.agent.patch(`/api/share/${p.token}/comments/${id}`).send({ hidden: true });
     expect(hid.status).toBe(200);
     expect(hid.body.comment).toMatchObject({ hidden: true, hiddenByAdmin: false });
     expect((await request(t.app).get(`/api/share/${p.token}/comments`)).body.comments).toEqual([]);
@@ -133,10 +133,10 @@ describe('deleting and hiding', () => {
     expect(ownerView.body.comments).toHaveLength(1);
     expect(ownerView.body.comments[0].hidden).toBe(true);
     // The author cannot hide (it is the owner's page), but can still delete their own words.
-    expect((await author.agent.patch(`/api/comments/${id}`).send({ hidden: false })).status).toBe(403);
-    expect((await owner.agent.patch(`/api/comments/${id}`).send({ hidden: false })).body.comment.hidden).toBe(false);
+    expect((await author.agent.patch(`/api/share/${p.token}/comments/${id}`).send({ hidden: false })).status).toBe(403);
+    expect((await owner.agent.patch(`/api/share/${p.token}/comments/${id}`).send({ hidden: false })).body.comment.hidden).toBe(false);
     expect((await request(t.app).get(`/api/share/${p.token}/comments`)).body.comments).toHaveLength(1);
-    expect((await author.agent.delete(`/api/comments/${id}`)).status).toBe(204);
+    expect((await author.agent.delete(`/api/share/${p.token}/comments/${id}`)).status).toBe(204);
   });
 });
 

@@ -22,8 +22,8 @@ async function pageWithComment(body = 'Buy cheap yarn at spam.example') {
 
 describe('POST /api/reports', () => {
   it('asks a visitor to sign in (401 with a sentence)', async () => {
-    const { commentId } = await pageWithComment();
-    const res = await request(t.app).post('/api/reports').send({ commentId, reason: 'spam' });
+    const { p, commentId } = await pageWithComment();
+    const res = await request(t.app).post('/api/reports').send({ shareToken: p.token, commentId, reason: 'spam' });
     expect(res.status).toBe(401);
     expect(res.body.error).toMatch(/sign in to report/i);
   });
@@ -31,25 +31,29 @@ describe('POST /api/reports', () => {
   it('lets any member report a comment or a page, once per open report', async () => {
     const { p, commentId } = await pageWithComment();
     const member = await signedInAgent(t.app, t.db);
-    const first = await member.agent.post('/api/reports').send({ commentId, reason: 'Advertising' });
+    const first = await member.agent.post('/api/reports').send({ shareToken: p.token, commentId, reason: 'Advertising' });
     expect(first.status).toBe(201);
     expect(first.body.report).toEqual({ id: expect.any(Number), status: 'open' });
-    const again = await member.agent.post('/api/reports').send({ commentId, reason: 'Advertising again' });
+    const again = await member.agent.post('/api/reports').send({ shareToken: p.token, commentId, reason: 'Advertising again' });
     expect(again.status).toBe(200);
     expect(again.body.report.id).toBe(first.body.report.id);
     const page = await member.agent.post('/api/reports').send({ shareToken: p.token, reason: 'Not a crochet piece' });
     expect(page.status).toBe(201);
   });
 
-  it('refuses both targets at once, a missing reason, and things the member cannot see (404)', async () => {
+  it('refuses a missing reason or page, and things the member cannot see (404)', async () => {
     const { p, commentId } = await pageWithComment();
     const member = await signedInAgent(t.app, t.db);
-    expect((await member.agent.post('/api/reports').send({ commentId, shareToken: p.token, reason: 'both' })).status).toBe(422);
-    expect((await member.agent.post('/api/reports').send({ commentId })).status).toBe(422);
+    expect((await member.agent.post('/api/reports').send({ shareToken: p.token, commentId })).status).toBe(422);
+    // A comment is reported through its page: an id alone names nothing.
+    const idAlone = await member.agent.post('/api/reports').send({ commentId, reason: 'Looks wrong' });
+    expect(idAlone.status).toBe(422);
+    expect(idAlone.body.issues).toContainEqual({ path: 'shareToken', message: 'Say which page this is about (its link).' });
     const owner = await createTestUser(t.db);
     const priv = await createShowcaseProject(t.db, owner.id, { visibility: 'private' });
     expect((await member.agent.post('/api/reports').send({ shareToken: priv.token, reason: 'Looks wrong' })).status).toBe(404);
-    expect((await member.agent.post('/api/reports').send({ commentId: 999999, reason: 'Looks wrong' })).status).toBe(404);
+    expect((await member.agent.post('/api/reports').send({ shareToken: p.token, commentId: 999999, reason: 'Looks wrong' })).status).toBe(404);
+    expect(await t.db('reports').where({ reporter_id: member.user.id }).count({ n: '*' }).first()).toEqual({ n: 0 });
   });
 });
 
@@ -65,8 +69,8 @@ describe('the admins’ report queue', () => {
     const { p, commentId, owner } = await pageWithComment('Visit spam.example <b>now</b>');
     const r1 = await signedInAgent(t.app, t.db, { displayName: 'Reporter One' });
     const r2 = await signedInAgent(t.app, t.db, { displayName: 'Reporter Two' });
-    const id1 = (await r1.agent.post('/api/reports').send({ commentId, reason: 'Spam link' })).body.report.id;
-    await r2.agent.post('/api/reports').send({ commentId, reason: 'Advertising' });
+    const id1 = (await r1.agent.post('/api/reports').send({ shareToken: p.token, commentId, reason: 'Spam link' })).body.report.id;
+    await r2.agent.post('/api/reports').send({ shareToken: p.token, commentId, reason: 'Advertising' });
 
     const list = await admin.agent.get('/api/admin/reports');
     expect(list.status).toBe(200);
@@ -94,7 +98,7 @@ describe('the admins’ report queue', () => {
     // The owner sees it marked as hidden by an admin and cannot show it again.
     const ownerView = await owner.agent.get(`/api/share/${p.token}/comments`);
     expect(ownerView.body.comments[0]).toMatchObject({ hidden: true, hiddenByAdmin: true });
-    const unhide = await owner.agent.patch(`/api/comments/${commentId}`).send({ hidden: false });
+    const unhide = await owner.agent.patch(`/api/share/${p.token}/comments/${commentId}`).send({ hidden: false });
     expect(unhide.status).toBe(409);
     expect(unhide.body.error).toMatch(/admin hid this comment/);
 
@@ -119,7 +123,7 @@ describe('the admins’ report queue', () => {
   it('dismissing leaves the comment up', async () => {
     const { p, commentId } = await pageWithComment('Just a nice comment');
     const reporter = await signedInAgent(t.app, t.db);
-    const id = (await reporter.agent.post('/api/reports').send({ commentId, reason: 'I misread it' })).body.report.id;
+    const id = (await reporter.agent.post('/api/reports').send({ shareToken: p.token, commentId, reason: 'I misread it' })).body.report.id;
     const res = await admin.agent.post(`/api/admin/reports/${id}/resolve`).send({ action: 'dismiss' });
     expect(res.body.report.status).toBe('dismissed');
     expect((await request(t.app).get(`/api/share/${p.token}/comments`)).body.comments).toHaveLength(1);
