@@ -166,7 +166,8 @@ describe('the showcase for a signed-in friend', () => {
     server.use(
       http.get(`*/api/share/${TOKEN}`, () => HttpResponse.json({ showcase: buildShowcase({ viewer: { signedIn: true, isOwner: true, ownerProjectId: 7 } }) })),
       http.get(`*/api/share/${TOKEN}/comments`, () => HttpResponse.json({ comments: [buildComment({ body: 'Rude words', canDelete: true, canHide: true, hidden })] })),
-      http.patch('*/api/comments/1', async ({ request }) => {
+      // Comments are changed through the page's own link, never by id alone.
+      http.patch(`*/api/share/${TOKEN}/comments/1`, async ({ request }) => {
         hidden = ((await request.json()) as { hidden: boolean }).hidden;
         return HttpResponse.json({ comment: buildComment({ body: 'Rude words', canHide: true, canDelete: true, hidden }) });
       }),
@@ -178,5 +179,61 @@ describe('the showcase for a signed-in friend', () => {
     expect(await screen.findByText('Hidden. Only you can see it.')).toBeInTheDocument();
     expect(hidden).toBe(true);
     expect(screen.getByRole('button', { name: 'Show again' })).toBeInTheDocument();
+  });
+
+  it('lets the owner delete a comment, through the page’s link', async () => {
+    let comments = [buildComment({ body: 'Off-topic', canDelete: true, canHide: true })];
+    const deleted: string[] = [];
+    server.use(
+      http.get(`*/api/share/${TOKEN}`, () => HttpResponse.json({ showcase: buildShowcase({ viewer: { signedIn: true, isOwner: true, ownerProjectId: 7 } }) })),
+      http.get(`*/api/share/${TOKEN}/comments`, () => HttpResponse.json({ comments })),
+      http.delete(`*/api/share/${TOKEN}/comments/:id`, ({ params }) => {
+        deleted.push(String(params.id));
+        comments = [];
+        return new HttpResponse(null, { status: 204 });
+      }),
+    );
+    renderRoute(`/p/${TOKEN}`);
+    const user = userEvent.setup();
+    expect(await screen.findByText('Off-topic')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Delete' }));
+    await user.click(screen.getByRole('button', { name: 'Delete comment' }));
+    expect(await screen.findByText(/No comments yet/)).toBeInTheDocument();
+    expect(deleted).toEqual(['1']);
+  });
+
+  it('reports a comment or the page with the page’s link, so the server can check the comment is on it', async () => {
+    const reports: unknown[] = [];
+    server.use(
+      http.get(`*/api/share/${TOKEN}`, () => HttpResponse.json({ showcase: buildShowcase({ viewer: { signedIn: true, isOwner: false, ownerProjectId: null } }) })),
+      http.get(`*/api/share/${TOKEN}/comments`, () => HttpResponse.json({ comments: [buildComment({ id: 42, body: 'Buy cheap yarn here' })] })),
+      http.post('*/api/reports', async ({ request }) => {
+        const body = await request.json();
+        reports.push(body);
+        if (reports.length === 1) return HttpResponse.json({ error: 'That comment could not be found.' }, { status: 404 });
+        return HttpResponse.json({ report: { id: reports.length, status: 'open' } }, { status: 201 });
+      }),
+    );
+    renderRoute(`/p/${TOKEN}`);
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole('button', { name: 'Report the comment by Robin Vale' }));
+    expect(screen.getByRole('heading', { name: 'Report this comment' })).toBeInTheDocument();
+    await user.type(screen.getByLabelText('What is wrong?'), 'Advertising');
+    await user.click(screen.getByRole('button', { name: 'Send report' }));
+    // The server's sentence stays beside the box when it refuses.
+    expect(await screen.findByText('That comment could not be found.')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Send report' }));
+    await waitFor(() => expect(screen.queryByRole('heading', { name: 'Report this comment' })).toBeNull());
+
+    await user.click(screen.getByRole('button', { name: 'Report this page' }));
+    await user.type(screen.getByLabelText('What is wrong?'), 'Copied photos');
+    await user.click(screen.getByRole('button', { name: 'Send report' }));
+    await waitFor(() => expect(screen.queryByRole('heading', { name: 'Report this page' })).toBeNull());
+
+    expect(reports).toEqual([
+      { shareToken: TOKEN, commentId: 42, reason: 'Advertising' },
+      { shareToken: TOKEN, commentId: 42, reason: 'Advertising' },
+      { shareToken: TOKEN, reason: 'Copied photos' },
+    ]);
   });
 });

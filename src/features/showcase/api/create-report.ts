@@ -4,6 +4,7 @@ import type { CreateReportInput } from '@/schemas/share';
 
 export { ReportFormSchema } from '@/schemas/share';
 
+/** Always names the page by its link token; `commentId` narrows it to one comment on that page. */
 export const createReport = (input: CreateReportInput) => apiPost<{ report: { id: number; status: 'open' } }>('/reports', input).then((r) => r.report);
 
 export function useCreateReport() {

@@ -3,12 +3,14 @@ import { apiPatch } from '@/lib/api-client';
 import type { ShowcaseComment } from '@/types/showcase';
 import { showcaseKeys } from './keys';
 
-export const setCommentHidden = (id: number, hidden: boolean) => apiPatch<{ comment: ShowcaseComment }>(`/comments/${id}`, { hidden }).then((r) => r.comment);
+/** Only the page's owner may hide; the comment is addressed through the page's link, like every comment change. */
+export const setCommentHidden = (token: string, id: number, hidden: boolean) =>
+  apiPatch<{ comment: ShowcaseComment }>(`/share/${encodeURIComponent(token)}/comments/${id}`, { hidden }).then((r) => r.comment);
 
 export function useSetCommentHidden(token: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, hidden }: { id: number; hidden: boolean }) => setCommentHidden(id, hidden),
+    mutationFn: ({ id, hidden }: { id: number; hidden: boolean }) => setCommentHidden(token, id, hidden),
     onSuccess: () => qc.invalidateQueries({ queryKey: showcaseKeys.detail(token) }),
   });
 }

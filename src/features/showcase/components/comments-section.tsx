@@ -100,7 +100,7 @@ export function CommentsSection({ token, signedIn, isOwner }: { token: string; s
         )}
       </div>
 
-      {reporting !== null ? <ReportDialog target={{ commentId: reporting }} onClose={() => setReporting(null)} /> : null}
+      {reporting !== null ? <ReportDialog target={{ shareToken: token, commentId: reporting }} onClose={() => setReporting(null)} /> : null}
       <ConfirmDialog
         open={deleting !== null}
         title="Delete this comment?"

@@ -9,7 +9,7 @@ import type { ReportFormValues } from '@/schemas/share';
 import { ReportFormSchema, useCreateReport } from '../api/create-report';
 
 /** Asks an admin to look at a comment or the whole page. Only shown to signed-in members. */
-export function ReportDialog({ target, onClose }: { target: { commentId: number } | { shareToken: string }; onClose: () => void }) {
+export function ReportDialog({ target, onClose }: { target: { shareToken: string; commentId?: number }; onClose: () => void }) {
   const ref = useRef<HTMLDialogElement>(null);
   const report = useCreateReport();
   const form = useForm<ReportFormValues>({ resolver: zodResolver(ReportFormSchema), defaultValues: { reason: '' } });
@@ -17,7 +17,7 @@ export function ReportDialog({ target, onClose }: { target: { commentId: number 
     const d = ref.current;
     if (d && !d.open) d.showModal?.();
   }, []);
-  const what = 'commentId' in target ? 'this comment' : 'this page';
+  const what = target.commentId !== undefined ? 'this comment' : 'this page';
   const submit = form.handleSubmit((values) =>
     report.mutate(
       { ...target, reason: values.reason },
