@@ -36,6 +36,8 @@ export interface StNode {
   roleAlt?: { id: number; options: ChainRole[] };
   /** For a chain that counts as a stitch: which. */
   countsAs?: StitchEntry;
+  /** "ch 5 (counts as dc + ch 2)": the last chains of a counting chain make a chain space. */
+  plusCh?: number;
   /** Leading chain followed by "(counts as …)" / "(does not count)". */
   annotated?: boolean;
   /** "dc in 4th ch from hook": do the skipped chains count as a stitch? Resolved like roleAlt. */

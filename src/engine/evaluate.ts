@@ -598,8 +598,17 @@ class Walker {
         const as = n.countsAs ?? STITCH_BY_ID.get('dc')!;
         // After slip stitches that moved into place, the chain stands in the stitch they reached.
         const works = this.base === 'ring' || this.pool === 0 || this.anyWorked ? 0 : 1;
-        this.step(`ch ${count}`, `ch ${count} (counts as the first ${this.abbr(as)})`, works, 1, loop, n.col);
+        const extra = n.plusCh && n.plusCh < count ? n.plusCh : 0;
+        if (!extra) {
+          this.step(`ch ${count}`, `ch ${count} (counts as the first ${this.abbr(as)})`, works, 1, loop, n.col);
+          this.addMade(as.madeAs, 1);
+          return;
+        }
+        this.step(`ch ${count}`, `ch ${count} (counts as the first ${this.abbr(as)} and a ch-${extra} space)`, works, 1 + extra, loop, n.col, 2);
+        this.lay(1, false);
+        this.lay(extra, true);
         this.addMade(as.madeAs, 1);
+        this.addMade('ch', extra);
         return;
       }
       case 'foundation':

@@ -186,6 +186,8 @@ class Reader {
   uncertain = false;
   seenStitch = false;
   lastSt: StNode | null = null;
+  /** "(sc, ch 3) in same sp and in each ch-sp around": a group worked into a target, which "and in …" repeats. */
+  lastGroup: GroupNode | null = null;
   repRound: RepRound | null = null;
   saidUkSc = false;
   readonly other: Terms;
@@ -349,7 +351,8 @@ function statedOf(br: Br, r: Reader): number | null {
 
 type BracketKind =
   | { k: 'times'; n: number; more: boolean; ambiguous: boolean; fill: number | null }
-  | { k: 'counts'; as: StitchEntry | null }
+  /** `plusCh`: "(counts as dc + ch 2)" — the chain also makes a chain space of that many. */
+  | { k: 'counts'; as: StitchEntry | null; plusCh?: number }
   | { k: 'notcounts' }
   | { k: 'loop'; loop: Loop | null }
   | { k: 'comment' }
@@ -366,7 +369,17 @@ function bracketKind(br: Br, r: Reader): BracketKind {
     for (const t of after) {
       if (t.v === 'st') return { k: 'counts', as: null };
       const e = r.stitch(t);
-      if (e && e.id !== 'ch') return { k: 'counts', as: e };
+      if (e && e.id !== 'ch') {
+        // "(counts as dc + ch 2)", "(counts as dc and ch-2 sp)": the rest of the chain is a chain space.
+        const at = toks.indexOf(t);
+        let plusCh = 0;
+        for (let k = at + 1; k < toks.length && !plusCh; k++) {
+          const u = toks[k];
+          if (u.k === 'word' && u.v === 'chsp' && u.n > 0) plusCh = u.n;
+          else if (u.k === 'word' && u.v === 'ch' && toks[k + 1]?.k === 'num') plusCh = toks[k + 1].n;
+        }
+        return plusCh ? { k: 'counts', as: e, plusCh } : { k: 'counts', as: e };
+      }
     }
     return { k: 'counts', as: null };
   }
@@ -707,6 +720,7 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
   let turnAfter: number | null = null;
   let role: ChainRole | undefined;
   let countsAs: StitchEntry | undefined;
+  let plusCh = 0;
   let annotated = false;
   for (let guard = 0; guard < 64 && !c.done(); guard++) {
     const e = c.el!;
@@ -715,6 +729,7 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
       if (kind.k === 'counts' && entry.id === 'ch') {
         role = 'counts';
         countsAs = kind.as ?? undefined;
+        if (kind.plusCh) plusCh = kind.plusCh;
         annotated = true;
       } else if (kind.k === 'notcounts' && entry.id === 'ch') {
         role = 'turning';
@@ -849,6 +864,7 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
   if (incOf) node.incOf = incOf;
   if (role) node.role = role;
   if (countsAs) node.countsAs = countsAs;
+  if (plusCh) node.plusCh = plusCh;
   if (annotated) node.annotated = true;
   if (inherit) node.inherited = true;
   if (bareFill && pre === null && times === 1 && !inherit && into.t === 'next' && units.u !== 'n') node.bareFill = true;
@@ -869,6 +885,7 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
   } else out.push(node);
   if (turnAfter !== null) out.push({ t: 'turn', col: turnAfter });
   r.lastSt = node;
+  r.lastGroup = null;
   r.seenStitch = true;
   return true;
 }
@@ -946,6 +963,9 @@ function readGroup(c: Cursor, r: Reader, out: Item[], clauseLoop: Loop | null): 
   g.end = c.i > 0 ? Math.max(g.end, (c.els[c.i - 1] as El).end) : g.end;
   out.push(g);
   r.seenStitch = true;
+  // What "… and in each …" carries over is the group, not the last stitch inside it.
+  r.lastSt = null;
+  r.lastGroup = g.into && g.times.k === 'n' && g.times.n === 1 ? g : null;
 }
 
 /** Words of a clause, for the whole-clause recognisers. */
@@ -1135,6 +1155,17 @@ function readClauseBody(rawEls: El[], sep: string | null, r: Reader, out: Item[]
     out.push({ t: 'otherside', col });
     return;
   }
+  const lastGroup = r.lastGroup;
+  if (lastGroup && (sep === 'and' || sep === ',') && isWord(els[0], 'in', 'on', 'each', 'next')) {
+    const c = new Cursor(els);
+    if (isWord(c.el, 'in', 'on')) c.i++;
+    const tg = readTarget(c, r);
+    if (tg && !tg.bare && c.done()) {
+      out.push({ ...lastGroup, into: tg.into, units: tg.units, col, end, loop: tg.loop ?? lastGroup.loop });
+      r.seenStitch = true;
+      return;
+    }
+  }
   // Comment: no number, no bracket, no stitch and no action word ("pulling tight", "stuff as you go").
   const actiony = words.some(isActionWord);
   // "… and in each ch across": the stitch carries over from the clause before.
@@ -1298,6 +1329,7 @@ function annotateLastChain(r: Reader, kind: BracketKind): void {
   else if (kind.k === 'counts') {
     last.role = 'counts';
     if (kind.as) last.countsAs = kind.as;
+    if (kind.plusCh) last.plusCh = kind.plusCh;
   }
 }
 
