@@ -119,6 +119,17 @@ test('share a finished piece by link, open it signed out, then comment as a frie
   await friend.getByRole('button', { name: /^Cheer/ }).click();
   await expect(friend.getByRole('button', { name: /You cheered/ })).toHaveAttribute('aria-pressed', 'true');
 
+  // The maker hides the comment from their own page (through the page's link); the friend no longer sees it.
+  const ownerView = await page.context().newPage();
+  await ownerView.goto(newLink);
+  const ownersCopy = ownerView.getByRole('listitem').filter({ has: ownerView.getByTestId('comment-body').filter({ hasText: comment }) });
+  await ownersCopy.getByRole('button', { name: 'Hide' }).click();
+  await expect(ownersCopy.getByText('Hidden. Only you can see it.')).toBeVisible();
+  await friend.reload();
+  await expect(friend.getByRole('heading', { level: 1, name: title })).toBeVisible();
+  await expect(friend.getByTestId('comment-body').filter({ hasText: comment })).toHaveCount(0);
+  await ownerView.close();
+
   // The maker makes it private again: the link stops working at once.
   await page.getByRole('radio', { name: /Private/ }).check();
   await expect(linkBox).toHaveCount(0);
