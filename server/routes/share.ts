@@ -19,7 +19,7 @@ import { HttpError } from '../lib/http-error.js';
 import { currentUser, requireRole, requireUser } from '../middleware/require-user.js';
 import { validate } from '../middleware/validate.js';
 import { addCheer, removeCheer } from '../services/cheers.js';
-import { addComment, deleteComment, listComments, setCommentHidden } from '../services/comments.js';
+import { addComment, deleteComment, deleteCommentById, listComments, setCommentHidden } from '../services/comments.js';
 import { getProject } from '../services/projects.js';
 import { createReport, listReports, resolveReport } from '../services/reports.js';
 import { getShareSettings, makerProfile, rotateShareToken, shareStatus, showcaseView, updateShareSettings } from '../services/share.js';
@@ -134,13 +134,19 @@ export function shareRouter(ctx: AppContext) {
     res.status(204).end();
   });
 
+  // The published shape: the author or the page owner only, and the same 404 for everyone else (services/comments.ts).
+  router.delete('/comments/:id', requireUser, validate({ params: IdParamsSchema }), async (req, res) => {
+    await deleteCommentById(db, Number(req.params.id), currentUser(res));
+    res.status(204).end();
+  });
+
   router.patch('/share/:token/comments/:id', requireUser, validate({ params: ShareCommentParamsSchema, body: UpdateCommentSchema }), async (req, res) => {
     const { token, id } = req.params as unknown as ShareCommentParams;
     const { hidden } = req.body as z.infer<typeof UpdateCommentSchema>;
     res.json({ comment: await setCommentHidden(db, token, id, currentUser(res), hidden) });
   });
 
-  // The body always carries the page's link token, with a comment id when the report is about one comment on it.
+  // The showcase page sends the page's link token (and a comment id for one comment); a bare comment id is also taken.
   router.post('/reports', (_req, res, next) => {
     if (!res.locals.user) throw new HttpError(401, 'Please sign in to report something, so the admins can reach you if they need to.');
     next();

@@ -120,6 +120,16 @@ export async function deleteComment(db: Knex, token: string, commentId: number, 
   await db('comments').where({ id: row.id }).delete();
 }
 
+/**
+ * `DELETE /api/comments/:id` (the API's published shape): the author or the page's owner deletes it, whether or not
+ * the page is still shared. To anyone else an existing comment and a missing one are the same 404.
+ */
+export async function deleteCommentById(db: Knex, commentId: number, user: User) {
+  const row = await db('comments as c').join('projects as p', 'p.id', 'c.project_id').where('c.id', commentId).first('c.id', 'c.author_id', 'p.owner_id');
+  if (!row || (row.author_id !== user.id && row.owner_id !== user.id)) throw notFound(COMMENT);
+  await db('comments').where({ id: row.id }).delete();
+}
+
 export async function setCommentHidden(db: Knex, token: string, commentId: number, user: User, hidden: boolean) {
   const { row, ownerId } = await commentOnPage(db, token, commentId, user.id);
   if (ownerId !== user.id) {

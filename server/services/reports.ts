@@ -15,7 +15,18 @@ type Row = Record<string, any>;
 
 export async function createReport(db: Knex, user: User, input: CreateReportInput) {
   // The page first: a link that does not open a page this member may see is "not found", whatever the comment id.
-  const project = await sharedProjectByToken(db, input.shareToken);
+  // A bare comment id finds its page through the comment, and then passes the same check.
+  let token = input.shareToken;
+  if (token === undefined) {
+    const owner = await db('comments as c').join('projects as p', 'p.id', 'c.project_id').where('c.id', input.commentId!).first('p.share_token');
+    if (!owner?.share_token) throw notFound('That comment');
+    token = owner.share_token as string;
+  }
+  const project = await sharedProjectByToken(db, token).catch((err: unknown) => {
+    // Reached through a bare comment id, a closed page means that comment is not there to report.
+    if (input.shareToken === undefined && err instanceof HttpError && err.status === 404) throw notFound('That comment');
+    throw err;
+  });
   let target: { target: 'comment' | 'project'; comment_id: number | null; project_id: number };
   if (input.commentId !== undefined) {
     // Only a comment the member can read on this very page can be reported. An unknown id, one from another page

@@ -47,16 +47,21 @@ const Reason = z
   .max(REPORT_REASON_MAX, { message: `Keep the reason under ${REPORT_REASON_MAX} characters.` });
 
 /**
- * A report always names the page by its link token; with a comment id it is about that comment on that page. A
- * comment is only ever reached through the page it is on, so an id alone (from another page, or guessed) finds nothing.
+ * A report names the page by its link token, with a comment id when it is about one comment on that page (what
+ * the showcase page sends). `{ commentId }` alone is still taken, for the API's published shape, and finds the
+ * comment only while its page is open and the comment shown.
  */
 export const CreateReportSchema = z
   .object({
-    shareToken: z.string({ message: 'Say which page this is about (its link).' }).min(1, { message: 'Say which page this is about (its link).' }).max(100),
+    shareToken: z.string().min(1, { message: 'Say which page this is about (its link).' }).max(100).optional(),
     commentId: z.number({ message: 'That comment id is not a number.' }).int().positive().optional(),
     reason: Reason,
   })
-  .strict();
+  .strict()
+  .refine((v) => v.shareToken !== undefined || v.commentId !== undefined, {
+    message: 'Say which page or comment this is about.',
+    path: ['shareToken'],
+  });
 export type CreateReportInput = z.infer<typeof CreateReportSchema>;
 
 export const ReportFormSchema = z.object({ reason: Reason });

@@ -72,9 +72,9 @@ describe('a comment is only reachable through its own page', () => {
   it("an unlisted page's comment cannot be reported without its token, and can with it", async () => {
     const s = await twoPages();
     const reason = 'Rude words';
-    // By id alone: refused before anything is looked up (the page is missing from the report).
-    const idAlone = await s.stranger.agent.post('/api/reports').send({ commentId: s.unlistedComment, reason });
-    expect(idAlone.status).toBe(422);
+    // By id alone (the published shape), an unknown comment is not found, like one on a page that is not shared.
+    const idAlone = await s.stranger.agent.post('/api/reports').send({ commentId: s.unknownId, reason });
+    expect(answer(idAlone)).toEqual({ status: 404, body: { error: 'That comment could not be found.' } });
     // With another page's token, or a made-up one of the right shape.
     const cross = await s.stranger.agent.post('/api/reports').send({ shareToken: s.knownPage.token, commentId: s.unlistedComment, reason });
     expect(answer(cross)).toEqual({ status: 404, body: { error: 'That comment could not be found.' } });
@@ -132,13 +132,21 @@ describe('a comment is only reachable through its own page', () => {
     expect(await t.db('comments').where({ id: s.knownComment }).first()).toMatchObject({ hidden_by: s.known.user.id });
   });
 
-  it('the id-only routes are gone: a comment cannot be changed without its page', async () => {
+  it('DELETE /api/comments/:id (the published shape) is for the author and the page owner; anyone else gets the unknown-id 404', async () => {
     const s = await twoPages();
-    const del = await s.author.agent.delete(`/api/comments/${s.unlistedComment}`);
-    expect(del.status).toBe(404);
-    expect(del.body.error).toMatch(/There is no API route/);
+    const unknown = answer(await s.stranger.agent.delete(`/api/comments/${s.unknownId}`));
+    expect(unknown).toEqual({ status: 404, body: { error: 'That comment could not be found.' } });
+    // A stranger and another page's owner cannot tell an existing comment from a missing one.
+    expect(answer(await s.stranger.agent.delete(`/api/comments/${s.unlistedComment}`))).toEqual(unknown);
+    expect(answer(await s.known.agent.delete(`/api/comments/${s.unlistedComment}`))).toEqual(unknown);
+    expect(await t.db('comments').where({ id: s.unlistedComment }).first()).toBeDefined();
+    // Hiding has no id-only route: it goes through the page.
     expect((await s.unlisted.agent.patch(`/api/comments/${s.unlistedComment}`).send({ hidden: true })).status).toBe(404);
     expect(await t.db('comments').where({ id: s.unlistedComment }).first()).toMatchObject({ hidden_at: null });
+    // The page owner and the author may delete.
+    expect((await s.unlisted.agent.delete(`/api/comments/${s.unlistedComment}`)).status).toBe(204);
+    expect((await s.author.agent.delete(`/api/comments/${s.knownComment}`)).status).toBe(204);
+    expect(await t.db('comments').whereIn('id', [s.unlistedComment, s.knownComment])).toEqual([]);
   });
 });
 

@@ -45,10 +45,14 @@ describe('POST /api/reports', () => {
     const { p, commentId } = await pageWithComment();
     const member = await signedInAgent(t.app, t.db);
     expect((await member.agent.post('/api/reports').send({ shareToken: p.token, commentId })).status).toBe(422);
-    // A comment is reported through its page: an id alone names nothing.
-    const idAlone = await member.agent.post('/api/reports').send({ commentId, reason: 'Looks wrong' });
-    expect(idAlone.status).toBe(422);
-    expect(idAlone.body.issues).toContainEqual({ path: 'shareToken', message: 'Say which page this is about (its link).' });
+    // Neither a page nor a comment names nothing.
+    const nothing = await member.agent.post('/api/reports').send({ reason: 'Looks wrong' });
+    expect(nothing.status).toBe(422);
+    expect(nothing.body.issues).toContainEqual({ path: 'shareToken', message: 'Say which page or comment this is about.' });
+    // A bare comment id (the published shape) finds nothing on a page that is no longer shared.
+    await t.db('projects').where({ id: p.id }).update({ visibility: 'private' });
+    expect(await member.agent.post('/api/reports').send({ commentId, reason: 'Looks wrong' })).toMatchObject({ status: 404, body: { error: 'That comment could not be found.' } });
+    await t.db('projects').where({ id: p.id }).update({ visibility: 'link' });
     const owner = await createTestUser(t.db);
     const priv = await createShowcaseProject(t.db, owner.id, { visibility: 'private' });
     expect((await member.agent.post('/api/reports').send({ shareToken: priv.token, reason: 'Looks wrong' })).status).toBe(404);
