@@ -488,11 +488,10 @@ class Walker {
       this.step('sl st', `${this.abbr(e)} in the next stitch to finish (not counted)`, 0, 0, loop, n.col);
       return;
     }
-    const wpuFirst = this.worksPer(n.into, e, n.col);
-    const count =
-      n.into.t === 'space' && n.units.u !== 'n'
-        ? this.spaceUnits(n.units, n.into.size, n.word, n.col)
-        : this.unitCount(n.units, wpuFirst || e.works, n.word, n.col);
+    // "in each ch-sp around": how many spaces first, so that none left is said once.
+    const spaceFill = n.into.t === 'space' && n.units.u !== 'n' ? this.spaceUnits(n.units, n.into.t === 'space' ? n.into.size : 1, n.word, n.col) : -1;
+    const wpuFirst = spaceFill === 0 ? 0 : this.worksPer(n.into, e, n.col);
+    const count = spaceFill >= 0 ? spaceFill : this.unitCount(n.units, wpuFirst || e.works, n.word, n.col);
     const madeKey = n.incOf ? n.incOf.madeAs : e.madeAs;
     const makes = n.moving ? 0 : e.kind === 'inc' ? 2 : n.per * e.makes;
     const { action, text } = this.describe(n, makes);
@@ -628,12 +627,10 @@ class Walker {
     const loop = g.loop ?? outerLoop;
     if (g.into) {
       const inner = innerOf(g);
-      const wpuFirst = g.into.t === 'ring' ? 0 : this.worksPer(g.into, STITCH_BY_ID.get('sc')!, g.col);
+      const spaceFill = g.into.t === 'space' && g.units.u !== 'n' ? this.spaceUnits(g.units, g.into.size, g.display, g.col) : -1;
+      const wpuFirst = g.into.t === 'ring' || spaceFill === 0 ? 0 : this.worksPer(g.into, STITCH_BY_ID.get('sc')!, g.col);
       if (g.into.t === 'ring' && this.base !== 'ring') this.enterRing('mr');
-      const count =
-        g.into.t === 'space' && g.units.u !== 'n'
-          ? this.spaceUnits(g.units, g.into.size, g.display, g.col)
-          : this.unitCount(g.units, wpuFirst || 1, g.display, g.col);
+      const count = spaceFill >= 0 ? spaceFill : this.unitCount(g.units, wpuFirst || 1, g.display, g.col);
       const where =
         g.into.t === 'same' ? 'in the same stitch' : g.into.t === 'ring' ? 'in the ring' : g.into.t === 'space' ? 'in the next space' : `in the next ${this.noun()}`;
       for (let k = 1; k <= count; k++) {
@@ -682,7 +679,7 @@ class Walker {
         const fit = `but ${rem0} are left for it: it cannot fit the round (${plural(extra + 1, 'repeat leaves', 'repeats leave')} ${left} over)`;
         // "Round 2 has 13" when the repeat is the whole round, as "sc, dec around" usually is.
         const whole = start === 0 && leave === 0 && this.base === 'prev' && this.env.prevName && this.env.prevName !== 'the start';
-        const has = whole ? `but ${this.env.prevName} has ${rem0}: ${plural(extra + 1, 'repeat leaves', 'repeats leave')} ${left} over` : fit;
+        const has = whole ? `but ${this.env.prevName} has ${rem0}: it cannot fit the round (${plural(extra + 1, 'repeat leaves', 'repeats leave')} ${left} over)` : fit;
         this.problems.push(
           error(
             g.around
@@ -943,7 +940,7 @@ export function evaluate(parsed: Parsed, env: EvalEnv, opts: { nodes?: Node[]; i
 }
 
 function finish(w: Walker, env: EvalEnv, parsed: Parsed): EvalResult {
-  if (w.absorb && w.base === 'prev' && w.pos === w.absorb.pos && w.pos < w.pool) {
+  if (w.absorb && w.base === 'prev' && w.pos === w.absorb.pos && w.pos < w.pool && (!w.spaces() || w.spacesAhead(w.pool) === 0)) {
     // "(sc, ch 1) in each ch-sp around" ends in the last space: the stitches after it are passed on the way
     // to the join (common practice), so they are not "left unworked".
     const extra = w.pool - w.pos;

@@ -668,7 +668,8 @@ function readStitch(c: Cursor, r: Reader, out: Item[], inherit: StNode | null, c
     entry = inherit.entry;
     word = inherit.word;
     incOf = inherit.incOf;
-    if (inherit.per > 1 && inherit.into.t === 'next') pre = inherit.per;
+    // "2 sc in next st and in each st across", "2 sc in same sp and in each ch-sp around": 2 each time.
+    if (inherit.per > 1 && (inherit.into.t === 'next' || inherit.into.t === 'same' || inherit.into.t === 'space')) pre = inherit.per;
     if (loop === null) loop = inherit.loop;
   } else {
     const t = c.el;
@@ -1445,6 +1446,12 @@ function markIndex(list: Node[], level: number, lastOne = false): number {
   return at;
 }
 
+function markCount(list: Node[], level: number): number {
+  let n = 0;
+  for (const x of list) if (x.t === 'mark' && x.level === level) n++;
+  return n;
+}
+
 function isRepeatGroup(n: Node | undefined): n is GroupNode {
   return n !== undefined && n.t === 'group' && !n.into && !(n.times.k === 'n' && n.times.n === 1 && !n.star);
 }
@@ -1607,10 +1614,12 @@ function nestStars(items: Item[], r: Reader): Node[] {
     const parent = () => frames[frames.length - 1].list;
     let body: Node[] | null = null;
     let col = it.col;
+    let marks = 0;
     if (frames.length >= 2) {
       // The * repeat is still open: its first pass is worked as written, then the part up to the mark.
       const f = frames.pop()!;
       const at = markIndex(f.list, level);
+      marks = markCount(f.list, level);
       parent().push(...f.list);
       if (at >= 0) {
         body = f.list.slice(0, at);
@@ -1626,9 +1635,14 @@ function nestStars(items: Item[], r: Reader): Node[] {
           if (at >= 0) {
             body = n.body.slice(0, at);
             col = n.col;
+            marks = markCount(n.body, level);
           }
         }
       }
+    }
+    if (marks > 1) {
+      fail(`The repeat holds ${marks} '${m}' marks, so Whorlbook cannot tell which one '${it.text}' means: keep one`, it.col);
+      return;
     }
     if (!body) {
       const later = items.slice(idx + 1).some((x) => x.t === 'mark' && x.level === level);
@@ -1655,6 +1669,11 @@ function nestStars(items: Item[], r: Reader): Node[] {
     if (it.how === 'at') {
       const at = markIndex(g.body, it.level);
       const m = stars(it.level);
+      const marks = markCount(g.body, it.level);
+      if (marks > 1) {
+        fail(`The repeat holds ${marks} '${m}' marks, so Whorlbook cannot tell which one '${it.text}' means: keep one`, it.col);
+        return;
+      }
       if (at < 0) {
         fail(`'${it.text}' needs a '${m}' inside the repeat to say where the last repeat stops`, it.col);
         return;
@@ -1948,8 +1967,8 @@ function takeStated(els: El[], r: Reader): { stated: number | null; col: number 
     const e = els[i];
     if (e.k === 'br') {
       const n = statedOf(e, r);
-      // "(2 sc) in next st": a group with a target, not a count.
-      if (n !== null && !(isWord(els[i + 1], 'in', 'on') && !isWord(els[i + 2], 'all', 'total'))) {
+      // "(2 sc) in next st": a group with a target, not a count; "(2 sc) x6": a group repeated.
+      if (n !== null && !(isWord(els[i + 1], 'in', 'on') && !isWord(els[i + 2], 'all', 'total')) && !readTimes(els, i + 1)) {
         let tail = 0;
         for (const x of els.slice(i + 1)) if (notPunct(x) && !(x.k === 'br' && bracketKind(x, r).k === 'comment')) tail++;
         return { stated: n, col: e.col, cut: i, trailingFrom: tail ? i + 1 : null };
