@@ -93,6 +93,7 @@ export default function TallyRoute() {
       otherPiecesRemaining={others}
       cautions={data.cautions.map((c) => c.message)}
       stitchSize={size}
+      onPieceChanged={() => void qc.invalidateQueries({ queryKey: projectKeys.detail(projectId) })}
     />
   );
 }

@@ -47,6 +47,8 @@ export interface TallyScreenProps {
   /** Safety cautions of the project, shown with placement notes. */
   cautions: string[];
   stitchSize: StitchSize;
+  /** The piece was edited elsewhere (its count moved with no tap): read it again. */
+  onPieceChanged?: () => void;
 }
 
 type Sheet = 'jump' | 'mark' | 'marks' | 'settings' | null;
@@ -99,11 +101,12 @@ export function TallyScreen({
   otherPiecesRemaining,
   cautions,
   stitchSize,
+  onPieceChanged,
 }: TallyScreenProps) {
   const tally = useTally(piece, terms, memberId);
   const [settings, setSettings] = useTallySettings();
   const box = useOutbox();
-  const stream = useProgressStream(piece.id);
+  const stream = useProgressStream(piece.id, onPieceChanged);
   const wake = useWakeLock(settings.keepAwake);
   const placementsQuery = usePlacements(piece.id);
   const deletePlacement = useDeletePlacement(piece.id);

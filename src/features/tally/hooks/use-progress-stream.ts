@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import type { PieceProgress } from '@/types/api';
 import { acceptProgress } from '../api/get-progress';
@@ -14,9 +14,12 @@ const POLL_MS = 4_000;
  * Hears taps from the maker's other devices as the server commits them (server-sent events), and falls back to
  * asking every few seconds while the stream is down.
  */
-export function useProgressStream(pieceId: number): StreamState {
+export function useProgressStream(pieceId: number, onPieceChanged?: () => void): StreamState {
   const qc = useQueryClient();
   const [state, setState] = useState<StreamState>('connecting');
+  // Kept in a ref so a new callback each render does not reopen the stream.
+  const changed = useRef(onPieceChanged);
+  changed.current = onPieceChanged;
   useEffect(() => {
     let poll: ReturnType<typeof setInterval> | null = null;
     let refetchHistory: ReturnType<typeof setTimeout> | null = null;
@@ -55,6 +58,9 @@ export function useProgressStream(pieceId: number): StreamState {
       const ours = msg.opId !== null && outbox.getSnapshot().items.some((i) => i.opId === msg.opId);
       if (msg.opId) outbox.acknowledge(msg.opId);
       acceptProgress(qc, pieceId, msg.progress);
+      // No tap behind it: the server moved the count because the piece itself was edited (its rounds or copies),
+      // so the instructions on this screen are out of date too.
+      if (msg.opId === null) changed.current?.();
       if (!ours) {
         // Another device moved the count: its undo stack changed too.
         if (refetchHistory) clearTimeout(refetchHistory);
