@@ -75,7 +75,8 @@ interface Snapshot {
   anyWorked: boolean;
   clean: boolean;
   uncertain: boolean;
-  layout: Layout;
+  layout: Layout | null;
+  plain: number;
   spaceList: number[] | null | undefined;
   spacePtr: number;
   saidSpaces: boolean;
@@ -120,7 +121,9 @@ class Walker {
   ops = 0;
   clean = true;
   uncertain = false;
-  layout: Layout = [];
+  /** Null while the round has made no chain yet: then it is `plain` stitches (most rounds never need more). */
+  layout: Layout | null = null;
+  plain = 0;
   /** Chain spaces of the previous round as [start, end) pairs of positions, once asked for. */
   spaceList: number[] | null | undefined;
   /** First space not yet passed. */
@@ -179,6 +182,13 @@ class Walker {
   }
 
   lay(n: number, chain: boolean): void {
+    if (this.layout === null) {
+      if (!chain) {
+        this.plain += n;
+        return;
+      }
+      this.layout = this.plain ? [this.plain] : [];
+    }
     const L = this.layout;
     const last = L.length - 1;
     if (last >= 0 && L[last] < 0 === chain) L[last] += chain ? -n : n;
@@ -266,7 +276,7 @@ class Walker {
       ringKind: this.ringKind, side: this.side, chainPool: this.chainPool, foundationLen: this.foundationLen, pool: this.pool,
       made: new Map(this.made), loops: new Set(this.loops), loopMode: this.loopMode, overCol: this.overCol,
       fitFailed: this.fitFailed, leave: this.leave, repeat: this.repeat, anyWorked: this.anyWorked, clean: this.clean,
-      uncertain: this.uncertain, layout: [...this.layout], spaceList: this.spaceList, spacePtr: this.spacePtr,
+      uncertain: this.uncertain, layout: this.layout && [...this.layout], plain: this.plain, spaceList: this.spaceList, spacePtr: this.spacePtr,
       saidSpaces: this.saidSpaces, absorb: this.absorb,
     };
   }
@@ -293,6 +303,7 @@ class Walker {
     this.clean = s.clean;
     this.uncertain = s.uncertain;
     this.layout = s.layout;
+    this.plain = s.plain;
     this.spaceList = s.spaceList;
     this.spacePtr = s.spacePtr;
     this.saidSpaces = s.saidSpaces;
@@ -999,5 +1010,5 @@ function finish(w: Walker, env: EvalEnv, parsed: Parsed): EvalResult {
   }
   const made: Record<string, number> = {};
   for (const [k, v] of w.made) made[k] = v;
-  return { steps: w.steps, made, loops: [...w.loops], worked, stitches, problems, clean: w.clean, layout: w.layout, uncertain: w.uncertain };
+  return { steps: w.steps, made, loops: [...w.loops], worked, stitches, problems, clean: w.clean, layout: w.layout ?? (w.plain ? [w.plain] : []), uncertain: w.uncertain };
 }
