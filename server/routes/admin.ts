@@ -3,8 +3,8 @@ import { z } from 'zod';
 import type { AppContext } from '../context.js';
 import { currentUser, requireRole } from '../middleware/require-user.js';
 import { validate } from '../middleware/validate.js';
-import { AdminUserListQuerySchema, type AdminUserListQuery } from '../../src/schemas/auth.js';
-import { listUsers, setDisabled } from '../services/admin.js';
+import { AdminSetRoleSchema, AdminUserListQuerySchema, type AdminSetRoleInput, type AdminUserListQuery } from '../../src/schemas/auth.js';
+import { listUsers, setDisabled, setRole } from '../services/admin.js';
 
 const UserParams = z.object({ id: z.string().regex(/^[a-z0-9]{1,64}$/, { message: 'That member id is not valid.' }) });
 
@@ -24,6 +24,10 @@ export function adminRouter(ctx: AppContext) {
 
   router.post('/admin/users/:id/enable', validate({ params: UserParams }), async (req, res) => {
     res.json({ user: await setDisabled(ctx, currentUser(res).id, String(req.params.id), false) });
+  });
+
+  router.post('/admin/users/:id/role', validate({ params: UserParams, body: AdminSetRoleSchema }), async (req, res) => {
+    res.json({ user: await setRole(ctx, currentUser(res).id, String(req.params.id), (req.body as AdminSetRoleInput).role) });
   });
 
   return router;

@@ -104,3 +104,20 @@ export async function setDisabled(ctx: AppContext, adminId: string, id: string, 
   ctx.logger.info({ adminId, userId: id, disabled }, disabled ? 'member disabled' : 'member re-enabled');
   return getAdminUser(ctx.db, id);
 }
+
+/**
+ * Makes a member an admin or an admin a member again. Nobody changes their own role, so an admin can never lock
+ * everyone out of the admin screen (another admin has to do it). Takes effect on the member's next request, since
+ * every request reads the role afresh with the session.
+ */
+export async function setRole(ctx: AppContext, adminId: string, id: string, role: Role) {
+  if (id === adminId) throw new HttpError(409, 'You cannot change your own role. Ask another admin if it really must be done.');
+  await ctx.db.transaction(async (trx) => {
+    const user = await trx<UserRow>('users').where({ id }).first();
+    if (!user) throw notFound('That member');
+    if (role === 'admin' && user.disabled_at) throw new HttpError(409, 'Re-enable this member before making them an admin.');
+    if (user.role !== role) await trx('users').where({ id }).update({ role, updated_at: new Date().toISOString() });
+  });
+  ctx.logger.info({ adminId, userId: id, role }, 'member role changed');
+  return getAdminUser(ctx.db, id);
+}

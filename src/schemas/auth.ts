@@ -101,3 +101,6 @@ export const AdminUserListQuerySchema = z.object({
   sort: AdminUserSortSchema.default('-created'),
 });
 export type AdminUserListQuery = z.infer<typeof AdminUserListQuerySchema>;
+
+export const AdminSetRoleSchema = z.object({ role: z.enum(['member', 'admin'], { message: 'Choose "member" or "admin".' }) }).strict();
+export type AdminSetRoleInput = z.infer<typeof AdminSetRoleSchema>;

@@ -27,6 +27,7 @@ function member(i: number, over: Record<string, unknown> = {}) {
 function fakeMembers(total = 45) {
   const asked: URLSearchParams[] = [];
   const disabled = new Set<string>();
+  const admins = new Set<string>();
   server.use(
     http.get('*/api/auth/me', () => HttpResponse.json({ user: adminMe })),
     http.get('*/api/admin/users', ({ request }) => {
@@ -34,15 +35,21 @@ function fakeMembers(total = 45) {
       asked.push(q);
       const page = Number(q.get('page') ?? 1);
       const query = q.get('query') ?? '';
-      const all = Array.from({ length: total }, (_, i) => member(i + 1, { disabled: disabled.has(`m${i + 1}`) })).filter((m) => m.displayName.toLowerCase().includes(query.toLowerCase()));
+      const all = Array.from({ length: total }, (_, i) => member(i + 1, { disabled: disabled.has(`m${i + 1}`), role: admins.has(`m${i + 1}`) ? 'admin' : 'member' })).filter((m) => m.displayName.toLowerCase().includes(query.toLowerCase()));
       return HttpResponse.json({ users: all.slice((page - 1) * 20, page * 20), page, pageSize: 20, total: all.length, pageCount: Math.max(1, Math.ceil(all.length / 20)) });
+    }),
+    http.post('*/api/admin/users/:id/role', async ({ params, request }) => {
+      const { role } = (await request.json()) as { role: string };
+      if (role === 'admin') admins.add(String(params.id));
+      else admins.delete(String(params.id));
+      return HttpResponse.json({ user: member(Number(String(params.id).slice(1)), { role }) });
     }),
     http.post('*/api/admin/users/:id/disable', ({ params }) => {
       disabled.add(String(params.id));
       return HttpResponse.json({ user: member(Number(String(params.id).slice(1)), { disabled: true }) });
     }),
   );
-  return { asked, disabled };
+  return { asked, disabled, admins };
 }
 
 describe('the admin members screen', () => {
@@ -101,6 +108,22 @@ describe('the admin members screen', () => {
     expect(within(row).getByRole('button', { name: 'Re-enable Maker 2' })).toBeInTheDocument();
   });
 
+  it('makes a member an admin after the confirmation, shows the badge, and can make them a member again', async () => {
+    const { admins } = fakeMembers(3);
+    renderRoute('/admin');
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole('button', { name: 'Make admin Maker 3' }));
+    expect(await screen.findByText('Make Maker 3 an admin?')).toBeInTheDocument();
+    expect(admins.size).toBe(0);
+    await user.click(within(screen.getByRole('dialog')).getByRole('button', { name: 'Make admin' }));
+    await waitFor(() => expect(admins.has('m3')).toBe(true));
+    const row = (await screen.findByText('Maker 3', { selector: 'p' })).closest('tr')!;
+    expect(await within(row).findByText('Admin')).toBeInTheDocument();
+    await user.click(within(row).getByRole('button', { name: 'Make member Maker 3' }));
+    await user.click(within(screen.getByRole('dialog')).getByRole('button', { name: 'Make member' }));
+    await waitFor(() => expect(admins.has('m3')).toBe(false));
+  });
+
   it('does not offer to disable the admin themselves', async () => {
     fakeMembers(0);
     server.use(
@@ -111,6 +134,7 @@ describe('the admin members screen', () => {
     renderRoute('/admin');
     expect(await screen.findByText('(you)')).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Disable/ })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Make member/ })).not.toBeInTheDocument();
   });
 
   it('is not open to a member: the route sends them home', async () => {

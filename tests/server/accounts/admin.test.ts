@@ -20,6 +20,7 @@ describe('who may use /api/admin', () => {
     ['get', '/api/admin/users'],
     ['post', '/api/admin/users/abc/disable'],
     ['post', '/api/admin/users/abc/enable'],
+    ['post', '/api/admin/users/abc/role'],
     ['get', '/api/admin/anything-else'],
   ];
 
@@ -155,5 +156,41 @@ describe('disabling and re-enabling a member', () => {
     const user = await createTestUser(t.db);
     await admin.agent.post(`/api/admin/users/${user.id}/disable`).set('Origin', 'https://evil.example').expect(403);
     expect((await t.db('users').where({ id: user.id }).first()).disabled_at).toBeNull();
+  });
+});
+
+describe('changing a member’s role', () => {
+  it('makes a member an admin, who can use the admin screen on their next request, and makes them a member again', async () => {
+    const { agent, user } = await signedInAgent(t.app, t.db);
+    await agent.get('/api/admin/users').expect(403);
+    const up = await admin.agent.post(`/api/admin/users/${user.id}/role`).send({ role: 'admin' });
+    expect(up.status).toBe(200);
+    expect(up.body.user).toMatchObject({ id: user.id, role: 'admin' });
+    // The same session, no new sign-in: the role is read with the session on every request.
+    await agent.get('/api/admin/users').expect(200);
+    expect((await agent.get('/api/auth/me')).body.user.role).toBe('admin');
+
+    const down = await admin.agent.post(`/api/admin/users/${user.id}/role`).send({ role: 'member' });
+    expect(down.body.user).toMatchObject({ role: 'member' });
+    await agent.get('/api/admin/users').expect(403);
+  });
+
+  it('will not let an admin change their own role (409), nor make a disabled member an admin, and checks the body', async () => {
+    const self = await admin.agent.post(`/api/admin/users/${admin.user.id}/role`).send({ role: 'member' });
+    expect(self.status).toBe(409);
+    expect(self.body.error).toMatch(/your own role/);
+    expect((await t.db('users').where({ id: admin.user.id }).first()).role).toBe('admin');
+
+    const off = await createTestUser(t.db);
+    await admin.agent.post(`/api/admin/users/${off.id}/disable`).expect(200);
+    const promote = await admin.agent.post(`/api/admin/users/${off.id}/role`).send({ role: 'admin' });
+    expect(promote.status).toBe(409);
+    expect(promote.body.error).toMatch(/Re-enable/);
+
+    const bad = await admin.agent.post(`/api/admin/users/${off.id}/role`).send({ role: 'owner' });
+    expect([400, 422]).toContain(bad.status);
+    expect(bad.body.issues).toEqual([expect.objectContaining({ path: 'role' })]);
+    await admin.agent.post('/api/admin/users/nosuchmember/role').send({ role: 'admin' }).expect(404);
+    await admin.agent.post(`/api/admin/users/${off.id}/role`).set('Origin', 'https://evil.example').send({ role: 'admin' }).expect(403);
   });
 });

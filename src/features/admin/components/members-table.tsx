@@ -7,7 +7,7 @@ import {
   type PaginationState,
   type SortingState,
 } from '@tanstack/react-table';
-import { ArrowDown, ArrowUp, ArrowUpDown, Ban, CheckCircle2, ChevronLeft, ChevronRight, RotateCcw, Search } from 'lucide-react';
+import { ArrowDown, ArrowUp, ArrowUpDown, Ban, CheckCircle2, ChevronLeft, ChevronRight, RotateCcw, Search, ShieldCheck, UserMinus } from 'lucide-react';
 import { AdminUserSortSchema, type AdminUserSort } from '@/schemas/auth';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -17,6 +17,7 @@ import { Banner } from '@/components/ui/banner';
 import { cn } from '@/utils/cn';
 import { useAdminUsers, type AdminUser } from '../api/get-users';
 import { useSetUserDisabled } from '../api/set-user-disabled';
+import { useSetUserRole } from '../api/set-user-role';
 
 declare module '@tanstack/react-table' {
   // eslint-disable-next-line @typescript-eslint/no-unused-vars
@@ -68,7 +69,9 @@ export function MembersTable({ currentUserId }: { currentUserId: string }) {
   const [search, setSearch] = useState('');
   const query = useDebounced(search.trim(), 300);
   const [asking, setAsking] = useState<AdminUser | null>(null);
+  const [askingRole, setAskingRole] = useState<AdminUser | null>(null);
   const setDisabled = useSetUserDisabled();
+  const setRole = useSetUserRole();
 
   const sort = toSortParam(sorting);
   const list = useAdminUsers({ query, page: pagination.pageIndex + 1, sort });
@@ -136,11 +139,20 @@ export function MembersTable({ currentUserId }: { currentUserId: string }) {
         header: () => <span className="sr-only">Action</span>,
         cell: ({ row: { original: u } }) =>
           u.id === currentUserId ? null : (
-            <Button variant="secondary" className="w-full sm:w-auto" onClick={() => setAsking(u)}>
-              {u.disabled ? <RotateCcw aria-hidden className="h-4 w-4" /> : <Ban aria-hidden className="h-4 w-4 text-clay" />}
-              {u.disabled ? 'Re-enable' : 'Disable'}
-              <span className="sr-only"> {u.displayName}</span>
-            </Button>
+            <div className="flex w-full flex-wrap gap-2 sm:w-auto sm:flex-nowrap">
+              {u.disabled && u.role !== 'admin' ? null : (
+                <Button variant="secondary" className="flex-1 sm:flex-none" onClick={() => setAskingRole(u)}>
+                  {u.role === 'admin' ? <UserMinus aria-hidden className="h-4 w-4" /> : <ShieldCheck aria-hidden className="h-4 w-4" />}
+                  {u.role === 'admin' ? 'Make member' : 'Make admin'}
+                  <span className="sr-only"> {u.displayName}</span>
+                </Button>
+              )}
+              <Button variant="secondary" className="flex-1 sm:flex-none" onClick={() => setAsking(u)}>
+                {u.disabled ? <RotateCcw aria-hidden className="h-4 w-4" /> : <Ban aria-hidden className="h-4 w-4 text-clay" />}
+                {u.disabled ? 'Re-enable' : 'Disable'}
+                <span className="sr-only"> {u.displayName}</span>
+              </Button>
+            </div>
           ),
       }),
     ],
@@ -169,6 +181,11 @@ export function MembersTable({ currentUserId }: { currentUserId: string }) {
   const confirmChange = () => {
     if (!asking) return;
     setDisabled.mutate({ id: asking.id, disabled: !asking.disabled }, { onSettled: () => setAsking(null) });
+  };
+
+  const confirmRole = () => {
+    if (!askingRole) return;
+    setRole.mutate({ id: askingRole.id, role: askingRole.role === 'admin' ? 'member' : 'admin' }, { onSettled: () => setAskingRole(null) });
   };
 
   return (
@@ -285,6 +302,20 @@ export function MembersTable({ currentUserId }: { currentUserId: string }) {
           <p>
             They are signed out on every device at once and cannot sign in until an admin re-enables them. Their projects and patterns stay as they are.
           </p>
+        )}
+      </ConfirmDialog>
+      <ConfirmDialog
+        open={askingRole !== null}
+        title={askingRole?.role === 'admin' ? `Make ${askingRole.displayName} a member again?` : `Make ${askingRole?.displayName ?? ''} an admin?`}
+        confirmLabel={askingRole?.role === 'admin' ? 'Make member' : 'Make admin'}
+        onConfirm={confirmRole}
+        onCancel={() => setAskingRole(null)}
+        pending={setRole.isPending}
+      >
+        {askingRole?.role === 'admin' ? (
+          <p>They lose the admin screen and the report queue on their next tap. Their own projects and patterns stay as they are.</p>
+        ) : (
+          <p>They can see every member's e-mail, disable members and handle reports. Only choose someone you trust with that.</p>
         )}
       </ConfirmDialog>
     </div>
