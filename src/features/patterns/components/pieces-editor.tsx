@@ -9,6 +9,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { cn } from '@/utils/cn';
 import { PieceWorkspace } from './piece-workspace';
+import { HookSizeHint, YarnChoices } from '@/components/ui/piece-fields';
 
 const numberOrNull = (v: unknown) => (v === '' || v == null ? null : Number(v));
 
@@ -165,36 +166,15 @@ export function PiecesEditor() {
                   error={e?.hookMm?.message}
                   {...register(`pieces.${i}.hookMm`, { setValueAs: numberOrNull })}
                 />
-                <p className="text-sm font-semibold" aria-live="polite" data-testid="hook-label">
-                  {hookLabel ?? (
-                    <span className="font-normal text-ink/70 dark:text-oat/70">US size shows here</span>
-                  )}
-                </p>
+                <HookSizeHint label={hookLabel ?? null} />
               </div>
             </div>
 
-            <fieldset className="flex flex-col gap-2">
-              <legend className="mb-1 font-semibold">Yarns this piece uses</legend>
-              {yarnNames.length ? (
-                <div className="flex flex-wrap gap-x-5">
-                  {yarnNames.map((n) => (
-                    <label key={n} className="flex min-h-tap cursor-pointer items-center gap-2">
-                      <input
-                        type="checkbox"
-                        value={n}
-                        className="h-6 w-6 accent-moss"
-                        {...register(`pieces.${i}.yarns`)}
-                      />
-                      {n}
-                    </label>
-                  ))}
-                </div>
-              ) : (
-                <p className="text-sm text-ink/70 dark:text-oat/70">
-                  Add yarns under Materials below, then tick the ones this piece uses.
-                </p>
-              )}
-            </fieldset>
+            <YarnChoices
+              names={yarnNames}
+              field={register(`pieces.${i}.yarns`)}
+              empty="Add yarns under Materials below, then tick the ones this piece uses."
+            />
 
             <PieceWorkspace index={i} weight={weight} />
 

@@ -16,6 +16,7 @@ import { copiesProblem, reworkPiece, reworkRounds } from '@/schemas/piece-rework
 import { ProjectPieceFormSchema, type ProjectPieceFormOutput, type ProjectPieceFormValues } from '@/schemas/project';
 import type { ProjectPiece } from '@/types/api';
 import { cn } from '@/utils/cn';
+import { HookSizeHint, YarnChoices } from '@/components/ui/piece-fields';
 
 /** The round table as the patterns area draws it; the screen hands it in, since features do not import each other. */
 export type RoundTableView = ComponentType<{ check: PieceCheck; onJump?: (line: number, column: number | null) => void; className?: string }>;
@@ -182,33 +183,18 @@ export function PieceEditor({
               error={errors.hookMm?.message}
               {...register('hookMm', { setValueAs: millimetres })}
             />
-            <p className="text-sm font-semibold" aria-live="polite" data-testid="hook-label">
-              {hookValue ?? <span className="font-normal text-ink/70 dark:text-oat/70">US size shows here</span>}
-            </p>
+            <HookSizeHint label={hookValue ?? null} />
           </div>
         </div>
 
-        <fieldset className="flex flex-col gap-2">
-          <legend className="mb-1 font-semibold">Yarns this piece uses</legend>
-          {yarnChoices.length ? (
-            <div className="flex flex-wrap gap-x-5">
-              {yarnChoices.map((n) => (
-                <label key={n} className="flex min-h-tap cursor-pointer items-center gap-2">
-                  <input type="checkbox" value={n} className="h-6 w-6 accent-moss" {...register('yarns')} />
-                  {n}
-                </label>
-              ))}
-            </div>
-          ) : (
-            <p className="text-sm text-ink/70 dark:text-oat/70">Add yarns under Materials on this page, then tick the ones this piece uses.</p>
-          )}
+        <YarnChoices names={yarnChoices} field={register('yarns')} empty="Add yarns under Materials on this page, then tick the ones this piece uses.">
           {errors.yarns ? (
             <p role="alert" className="text-sm font-semibold text-clay">
               <span aria-hidden>⚠ </span>
               {errors.yarns.message ?? (Array.isArray(errors.yarns) ? errors.yarns.find(Boolean)?.message : null)}
             </p>
           ) : null}
-        </fieldset>
+        </YarnChoices>
 
         <div className="grid gap-4 lg:grid-cols-2">
           <TextAreaField
