@@ -4,6 +4,7 @@ import { HttpError } from '../lib/http-error.js';
 import { adminRouter } from './admin.js';
 import { authRouter } from './auth.js';
 import { devRouter } from './dev.js';
+import { hooksRouter } from './hooks.js';
 import { journalRouter } from './journal.js';
 import { patternsRouter } from './patterns.js';
 import { progressRouter } from './progress.js';
@@ -23,6 +24,7 @@ export function apiRouter(ctx: AppContext) {
   api.use(patternsRouter(ctx));
   api.use(projectsRouter(ctx));
   api.use(yarnsRouter(ctx));
+  api.use(hooksRouter(ctx));
   api.use(progressRouter(ctx));
   api.use(journalRouter(ctx));
   api.use(shareRouter(ctx));
