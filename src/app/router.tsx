@@ -42,6 +42,8 @@ const memberScreens: RouteObject[] = [
   { path: '/projects/new', ...screen(() => import('./routes/project-new')) },
   { path: '/projects/:projectId', ...screen(() => import('./routes/project')) },
   { path: '/yarns', ...screen(() => import('./routes/yarn-shelf')) },
+  // hook roll: /hooks
+  { path: '/hooks', ...screen(() => import('./routes/hook-roll')) },
 ];
 
 const adminScreens: RouteObject[] = [

@@ -18,6 +18,7 @@ export const paths = {
   project: (id: number | string) => `/projects/${id}`,
   tally: (projectId: number | string, pieceId: number | string) => `/projects/${projectId}/pieces/${pieceId}/count`,
   yarnShelf: '/yarns',
+  hookRoll: '/hooks',
   showcase: (token: string) => `/p/${token}`,
   makerProfile: (makerId: string) => `/m/${makerId}`,
   adminReports: '/admin/reports',

@@ -29,6 +29,7 @@ import { tallyKeys } from '@/features/tally/api/keys';
 import { ProjectDetailsForm } from '@/features/projects/components/project-details-form';
 import { projectStatuses, StatusBadge } from '@/features/projects/components/status';
 import { useYarns } from '@/features/yarns/api/get-yarns';
+import { HookRollCheck } from '@/features/hooks/components/hook-roll-check';
 import { JournalTimeline } from '@/features/journal/components/journal-timeline';
 import { SharePanel } from '@/features/showcase/components/share-panel';
 import { yarnKeys } from '@/features/yarns/api/keys';
@@ -226,6 +227,7 @@ export default function ProjectRoute() {
                     }
                   />
                 )}
+                {editingPiece !== piece.id && !ordering && piece.hookMm ? <HookRollCheck mm={piece.hookMm} className="mt-2" /> : null}
               </li>
             ))}
           </ul>

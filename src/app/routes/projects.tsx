@@ -1,5 +1,5 @@
 import { Link, useSearchParams } from 'react-router-dom';
-import { BookOpen, ChevronRight, Gift, Library, Plus, ShieldAlert } from 'lucide-react';
+import { BookOpen, ChevronRight, Gift, Library, Plus, Ruler, ShieldAlert } from 'lucide-react';
 import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { EmptyState, Loading, PageHeader } from '@/components/ui/page';
@@ -87,6 +87,17 @@ export default function ProjectsRoute() {
         <span className="flex-1">
           Yarn shelf
           <span className="block text-sm font-normal text-ink/70 dark:text-oat/70">Your yarns and how much is left</span>
+        </span>
+        <ChevronRight aria-hidden className="h-5 w-5" />
+      </Link>
+      <Link
+        to={paths.hookRoll}
+        className="mt-3 flex min-h-tap items-center gap-3 rounded-soft bg-wool/60 px-4 py-3 font-semibold hover:bg-wool dark:bg-white/5 dark:hover:bg-white/10"
+      >
+        <Ruler aria-hidden className="h-5 w-5 text-moss dark:text-[#9cc3a8]" />
+        <span className="flex-1">
+          Hook roll
+          <span className="block text-sm font-normal text-ink/70 dark:text-oat/70">Your hooks, smallest first</span>
         </span>
         <ChevronRight aria-hidden className="h-5 w-5" />
       </Link>

@@ -7,6 +7,8 @@ export const me = { id: 'u1', email: 'maker@example.com', displayName: 'Test mak
 export const defaultHandlers = [
   http.get('*/api/auth/me', () => HttpResponse.json({ user: me })),
   http.get('*/api/auth/demo', () => HttpResponse.json({ demo: null })),
+  // The project page asks the hook roll about each piece's hook; an empty roll unless a test says otherwise.
+  http.get('*/api/hooks', () => HttpResponse.json({ hooks: [] })),
 ];
 
 export const server = setupServer(...defaultHandlers);
