@@ -227,7 +227,7 @@ export default function ProjectRoute() {
                     }
                   />
                 )}
-                {editingPiece !== piece.id && !ordering && piece.hookMm ? <HookRollCheck mm={piece.hookMm} className="mt-2" /> : null}
+                {editingPiece !== piece.id && !ordering && piece.hookMm ? <HookRollCheck mm={piece.hookMm} /> : null}
               </li>
             ))}
           </ul>

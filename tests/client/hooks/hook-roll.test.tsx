@@ -55,7 +55,7 @@ describe('the hook roll', () => {
 
     await user.clear(size);
     await user.type(size, '2.5');
-    expect(screen.getByText('No US size on the chart for 2.5 mm, so it shows in mm only.')).toBeInTheDocument();
+    expect(screen.getByText('No US size on the chart: shown as 2.5 mm only.')).toBeInTheDocument();
     await user.clear(size);
     // A comma is how many makers write the decimal point.
     await user.type(size, '3,5');

@@ -16,7 +16,7 @@ function SizeHint({ mm }: { mm: unknown }) {
   const n = typeof mm === 'number' ? mm : Number(mm);
   if (!Number.isFinite(n) || n < 0.5 || n > 35) return <>In millimetres, as printed on the hook.</>;
   const us = usHookSize(n);
-  return us ? <>Shown as {formatHook(n)}.</> : <>No US size on the chart for {formatHook(n)}, so it shows in mm only.</>;
+  return us ? <>Shown as {formatHook(n)}.</> : <>No US size on the chart: shown as {formatHook(n)} only.</>;
 }
 
 /** Add or change a hook in the roll. The US size is looked up from the chart as the size is typed. */

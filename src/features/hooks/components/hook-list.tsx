@@ -35,13 +35,10 @@ export function HookList({ hooks, onEdit, onDelete }: { hooks: RollHook[]; onEdi
             <li key={h.id} className="flex items-center gap-3 rounded-blob bg-white/80 py-2 pl-2 pr-1 shadow-sm ring-1 ring-wool dark:bg-[#332e2a] dark:ring-[#4a423c]">
               <GaugeHole mm={h.mm} />
               <div className="min-w-0 flex-1 py-1">
-                <p className="text-lg font-bold leading-snug tabular">
-                  {hookName(h)}
-                  {h.quantity > 1 ? <span className="ml-2 rounded-full bg-wool px-2 py-0.5 text-sm font-semibold dark:bg-white/10">{h.quantity} of these</span> : null}
-                </p>
+                <p className="text-lg font-bold leading-snug tabular">{hookName(h)}</p>
                 <p className="text-sm text-ink/70 dark:text-oat/70">
-                  {h.us ? null : 'No US size · '}
-                  {details || (h.us ? 'No details yet' : 'mm only')}
+                  {h.quantity > 1 ? <span className="mr-1 inline-block whitespace-nowrap rounded-full bg-wool px-2 font-semibold text-ink dark:bg-white/10 dark:text-oat">{h.quantity} of these</span> : null}
+                  {[h.us ? null : 'No US size', details].filter(Boolean).join(' · ') || 'No details yet'}
                 </p>
                 {h.note ? <p className="text-sm text-ink/70 dark:text-oat/70">{h.note}</p> : null}
               </div>

@@ -15,17 +15,20 @@ export function HookRollCheck({ mm, className }: { mm: number; className?: strin
   if (!roll.data) return null;
   const have = hooksOfSize(roll.data, mm).length > 0;
   const size = formatHook(mm);
+  // Keep "2.5 mm" on one line when the sentence wraps on a phone.
+  const shown = size.replace(' mm', '\u00a0mm');
   return (
     <p
       data-testid="hook-roll-check"
       className={cn(
-        'flex min-h-tap items-center gap-2 rounded-soft py-1 pl-3 pr-1 text-sm font-semibold',
+        // Hangs under the piece's card like a tag, inset past the card's rounded corners so it reads as part of it.
+        'mx-6 flex min-h-tap items-center gap-2 rounded-b-soft py-1 pl-3 pr-1 text-sm font-semibold',
         have ? 'bg-[#dce8df] text-ink dark:bg-moss/35 dark:text-oat' : 'bg-wool/70 text-ink dark:bg-white/5 dark:text-oat',
         className,
       )}
     >
       {have ? <CircleCheck aria-hidden className="h-5 w-5 shrink-0 text-moss dark:text-[#9cc3a8]" /> : <CircleDashed aria-hidden className="h-5 w-5 shrink-0 text-clay dark:text-[#e59b7c]" />}
-      <span className="flex-1 tabular">{have ? `In your hook roll · ${size}` : `Not in your hook roll — ${size}`}</span>
+      <span className="flex-1 tabular">{have ? `In your hook roll · ${shown}` : `Not in your hook roll — ${shown}`}</span>
       {have ? null : (
         <Link
           to={`${paths.hookRoll}?size=${mm}`}
