@@ -2,7 +2,7 @@ import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type Selec
 import { cn } from '@/utils/cn';
 
 const control =
-  'w-full rounded-soft border-2 border-wool bg-white px-4 py-3 text-base text-ink placeholder:text-ink/40 focus:border-moss focus:outline-none min-h-tap dark:bg-[#332e2a] dark:border-[#4a423c] dark:text-oat aria-[invalid=true]:border-clay';
+  'w-full rounded-soft border-2 border-wool bg-white px-4 py-3 text-base text-ink placeholder:text-ink/40 dark:placeholder:text-oat/45 focus:border-moss focus:outline-none min-h-tap dark:bg-[#332e2a] dark:border-[#4a423c] dark:text-oat aria-[invalid=true]:border-clay';
 
 interface Wrap {
   label: ReactNode;
