@@ -58,6 +58,12 @@ export async function seedDemo(db: Knex, logger?: Logger) {
       const [{ id }] = await trx('yarns').insert({ owner_id: maker.id, ...y }).returning('id');
       shelfIds.push(id);
     }
+    // The hook roll has the 3.5 mm the body and leaves need, but not the stalk's 2.5 mm, so the project page shows both.
+    await trx('hooks').insert([
+      { owner_id: maker.id, size_mm: 3.5, material: 'aluminium', brand: null, note: 'The everyday one.', quantity: 1 },
+      { owner_id: maker.id, size_mm: 4, material: 'bamboo', brand: null, note: null, quantity: 1 },
+      { owner_id: maker.id, size_mm: 5, material: 'ergonomic', brand: null, note: 'For the chunky blanket.', quantity: 1 },
+    ]);
     const used = [40, 12, 3]; // meters so far, per pattern yarn
     const projectMaterials = {
       ...p.materials,

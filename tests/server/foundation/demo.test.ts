@@ -39,6 +39,15 @@ describe('the demo', () => {
     expect(admin.body.user.role).toBe('admin');
   });
 
+  it("gives the demo maker a hook roll with the body's 3.5 mm hook but not the stalk's 2.5 mm, so both states show", async () => {
+    const agent = request.agent(t.app);
+    await agent.post('/api/auth/signin').send({ email: DEMO_MAKER.email, password: DEMO_MAKER.password }).expect(200);
+    const sizes = (await agent.get('/api/hooks')).body.hooks.map((h: { mm: number }) => h.mm);
+    const pieces = demoPattern.pieces.map((p) => [p.name, p.hookMm] as const);
+    expect(pieces.filter(([, mm]) => sizes.includes(mm)).map(([n]) => n)).toEqual(expect.arrayContaining(['Body']));
+    expect(pieces.filter(([, mm]) => !sizes.includes(mm)).map(([n]) => n)).toEqual(['Stalk']);
+  });
+
   it('offers the demo account on the sign-in page only while running with demo data', async () => {
     const res = await request(t.app).get('/api/auth/demo');
     expect(res.body.demo).toEqual({ email: DEMO_MAKER.email, password: DEMO_MAKER.password });
