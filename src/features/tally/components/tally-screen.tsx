@@ -1,4 +1,13 @@
-import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import {
+  memo,
+  useCallback,
+  useDeferredValue,
+  useEffect,
+  useMemo,
+  useRef,
+  useState,
+  type ReactNode,
+} from 'react';
 import { Link } from 'react-router-dom';
 import {
   ArrowLeft,
@@ -91,6 +100,138 @@ function ToolButton({
   );
 }
 
+// The header and the tool bar are memoised on props that a tap does not change (the handlers are stable, see
+// `act` below), so a tap renders only what it changes: the zone, the time line and the spoken position.
+
+const TallyHeader = memo(function TallyHeader({
+  backTo,
+  projectTitle,
+  pieceName,
+  copy,
+  copies,
+  waiting,
+  live,
+  marks,
+  openSheet,
+}: {
+  backTo: string;
+  projectTitle: string;
+  pieceName: string;
+  copy: number;
+  copies: number;
+  /** Taps worth mentioning as waiting; 0 shows "Saved". */
+  waiting: number;
+  live: boolean;
+  marks: number;
+  openSheet: (sheet: Sheet) => void;
+}) {
+  const synced = waiting === 0;
+  return (
+    <header className="flex items-center gap-1 px-2 pt-[max(0.25rem,env(safe-area-inset-top))]">
+      <Link
+        to={backTo}
+        className="flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
+        aria-label={`Back to ${projectTitle}`}
+      >
+        <ArrowLeft aria-hidden className="h-7 w-7" />
+      </Link>
+      <div className="min-w-0 flex-1">
+        <h1 className="truncate text-xl font-bold leading-tight sm:text-2xl">
+          {pieceName}
+          {copies > 1 ? (
+            <span className="tabular">
+              {' '}
+              {copy} of {copies}
+            </span>
+          ) : null}
+        </h1>
+        <p className="truncate text-sm opacity-75">{projectTitle}</p>
+      </div>
+      <span
+        className={cn(
+          'flex min-h-14 items-center gap-1 rounded-soft px-2 text-sm font-bold',
+          synced ? 'opacity-75' : 'text-clay dark:text-[#e8a283]',
+        )}
+        title={live ? 'Live with your other devices' : 'Checking for changes every few seconds'}
+      >
+        {synced ? <Cloud aria-hidden className="h-5 w-5" /> : <CloudOff aria-hidden className="h-5 w-5" />}
+        <span className="tabular">{synced ? 'Saved' : `${waiting} waiting`}</span>
+      </span>
+      <button
+        type="button"
+        onClick={() => openSheet('marks')}
+        className="relative flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
+        aria-label={`Marks and silhouette (${marks})`}
+      >
+        <MapPin aria-hidden className="h-7 w-7" />
+        {marks ? (
+          <span className="tabular absolute top-1 right-1 rounded-full bg-clay px-1.5 text-xs font-bold text-oat">
+            {marks}
+          </span>
+        ) : null}
+      </button>
+      <button
+        type="button"
+        onClick={() => openSheet('settings')}
+        className="flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
+        aria-label="Tally settings"
+      >
+        <Settings2 aria-hidden className="h-7 w-7" />
+      </button>
+    </header>
+  );
+});
+
+const TallyTools = memo(function TallyTools({
+  mode,
+  canUndo,
+  countingDone,
+  onUndo,
+  onOther,
+  openSheet,
+}: {
+  mode: 'stitch' | 'round';
+  canUndo: boolean;
+  /** The piece is counted to the end and no note waits: nothing left to count. */
+  countingDone: boolean;
+  onUndo: () => void;
+  /** "One stitch" in round mode, "Round done" in stitch mode. */
+  onOther: () => void;
+  openSheet: (sheet: Sheet) => void;
+}) {
+  return (
+    <nav aria-label="Tally" className="flex gap-2 px-3 pt-2 pb-[max(0.75rem,env(safe-area-inset-bottom))]">
+      <ToolButton
+        tone="strong"
+        onClick={onUndo}
+        disabled={!canUndo}
+        icon={<Undo2 aria-hidden className="h-6 w-6" />}
+      >
+        Undo
+      </ToolButton>
+      {mode === 'round' ? (
+        <ToolButton onClick={onOther} disabled={countingDone} icon={<Plus aria-hidden className="h-6 w-6" />}>
+          One stitch
+        </ToolButton>
+      ) : (
+        <ToolButton
+          onClick={onOther}
+          disabled={countingDone}
+          icon={<CheckCheck aria-hidden className="h-6 w-6" />}
+        >
+          Round done
+        </ToolButton>
+      )}
+      <ToolButton onClick={() => openSheet('mark')} icon={<MapPinPlus aria-hidden className="h-6 w-6" />}>
+        Mark here
+      </ToolButton>
+      <ToolButton onClick={() => openSheet('jump')} icon={<ListOrdered aria-hidden className="h-6 w-6" />}>
+        Jump
+      </ToolButton>
+    </nav>
+  );
+});
+
 /** The Tally: one piece, counted stitch by stitch (or round by round) with one huge tap zone. */
 export function TallyScreen({
   piece,
@@ -124,19 +265,29 @@ export function TallyScreen({
     [settings.vibrate, settings.sound],
   );
 
-  const countTap = useCallback(() => {
-    feedback(settings.mode === 'round' ? tally.round() : tally.step());
-  }, [feedback, settings.mode, tally]);
-  const undo = useCallback(() => {
-    if (tally.undo()) feedback('undo');
-  }, [feedback, tally]);
-  const roundDone = useCallback(() => feedback(tally.round()), [feedback, tally]);
+  // The latest handlers, read through stable functions: the memoised header and tool bar never re-render just
+  // because a tap made new closures.
+  const act = useRef({ countTap: () => {}, undo: () => {}, other: () => {} });
+  act.current = {
+    countTap: () => feedback(settings.mode === 'round' ? tally.round() : tally.step()),
+    undo: () => {
+      if (tally.undo()) feedback('undo');
+    },
+    other: () => feedback(settings.mode === 'round' ? tally.step() : tally.round()),
+  };
+  const countTap = useCallback(() => act.current.countTap(), []);
   // After any control, the next pedal press or Enter should count again, not repeat that control.
-  const backToZone = () => zone.current?.focus({ preventScroll: true });
+  const backToZone = useCallback(() => zone.current?.focus({ preventScroll: true }), []);
+  const onUndo = useCallback(() => {
+    act.current.undo();
+    backToZone();
+  }, [backToZone]);
+  const onOther = useCallback(() => {
+    act.current.other();
+    backToZone();
+  }, [backToZone]);
 
   // Hands-free: a keyboard or a Bluetooth page-turner pedal.
-  const keys = useRef({ countTap, undo });
-  keys.current = { countTap, undo };
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
       if (e.ctrlKey || e.metaKey || e.altKey || e.defaultPrevented) return;
@@ -151,8 +302,8 @@ export function TallyScreen({
       if ((e.key === 'Enter' || e.key === ' ') && t && t !== zone.current && t.closest('button, a')) return;
       e.preventDefault();
       if (e.repeat) return; // a held key or a bouncing pedal is one tap
-      if (isStep) keys.current.countTap();
-      else keys.current.undo();
+      if (isStep) act.current.countTap();
+      else act.current.undo();
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
@@ -235,6 +386,11 @@ export function TallyScreen({
     if (tally.finished) return `${copy}${piece.name} is counted to the end.`;
     return `${copy}${view.name} of ${view.of}, stitch ${view.stepsDone} of ${view.stepsInRound}. ${view.next ? `Next: ${view.next.text}.` : ''}`;
   }, [view, position, piece, tally.unread, tally.finished]);
+  // What only needs to follow the count (the spoken position, working time and time left) is drawn in React's
+  // deferred pass, after the tap's own render: the tap's frame carries only the zone.
+  const spoken = useDeferredValue(announcement);
+  const doneLater = useDeferredValue(tally.done);
+  const remainingLater = useDeferredValue(tally.remainingSteps);
 
   const rootTone = hc
     ? 'bg-white text-black dark:bg-black dark:text-white'
@@ -292,60 +448,17 @@ export function TallyScreen({
       className={cn('flex h-dvh flex-col overflow-hidden', rootTone)}
       data-theme-contrast={hc ? 'high' : 'normal'}
     >
-      <header className="flex items-center gap-1 px-2 pt-[max(0.25rem,env(safe-area-inset-top))]">
-        <Link
-          to={backTo}
-          className="flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
-          aria-label={`Back to ${projectTitle}`}
-        >
-          <ArrowLeft aria-hidden className="h-7 w-7" />
-        </Link>
-        <div className="min-w-0 flex-1">
-          <h1 className="truncate text-xl font-bold leading-tight sm:text-2xl">
-            {piece.name}
-            {piece.copies > 1 ? (
-              <span className="tabular">
-                {' '}
-                {position.copy} of {piece.copies}
-              </span>
-            ) : null}
-          </h1>
-          <p className="truncate text-sm opacity-75">{projectTitle}</p>
-        </div>
-        <span
-          className={cn(
-            'flex min-h-14 items-center gap-1 rounded-soft px-2 text-sm font-bold',
-            synced ? 'opacity-75' : 'text-clay dark:text-[#e8a283]',
-          )}
-          title={
-            stream === 'live' ? 'Live with your other devices' : 'Checking for changes every few seconds'
-          }
-        >
-          {synced ? <Cloud aria-hidden className="h-5 w-5" /> : <CloudOff aria-hidden className="h-5 w-5" />}
-          <span className="tabular">{synced ? 'Saved' : `${waiting.count} waiting`}</span>
-        </span>
-        <button
-          type="button"
-          onClick={() => setSheet('marks')}
-          className="relative flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
-          aria-label={`Marks and silhouette (${placements.length})`}
-        >
-          <MapPin aria-hidden className="h-7 w-7" />
-          {placements.length ? (
-            <span className="tabular absolute top-1 right-1 rounded-full bg-clay px-1.5 text-xs font-bold text-oat">
-              {placements.length}
-            </span>
-          ) : null}
-        </button>
-        <button
-          type="button"
-          onClick={() => setSheet('settings')}
-          className="flex min-h-14 min-w-14 items-center justify-center rounded-soft hover:bg-wool dark:hover:bg-white/10"
-          aria-label="Tally settings"
-        >
-          <Settings2 aria-hidden className="h-7 w-7" />
-        </button>
-      </header>
+      <TallyHeader
+        backTo={backTo}
+        projectTitle={projectTitle}
+        pieceName={piece.name}
+        copy={position.copy}
+        copies={piece.copies}
+        waiting={synced ? 0 : waiting.count}
+        live={stream === 'live'}
+        marks={placements.length}
+        openSheet={setSheet}
+      />
 
       <div className="flex flex-col gap-2 px-3 empty:hidden">
         <SyncBanner state={box} memberId={memberId} pieceId={piece.id} />
@@ -415,61 +528,25 @@ export function TallyScreen({
         ) : null}
       </div>
       <p id="tally-position" className="sr-only" aria-live="polite" aria-atomic="true">
-        {announcement}
+        {spoken}
       </p>
 
       <div className="px-3">
         <TimeLine
           clock={tally.clock}
-          remainingPiece={tally.remainingSteps}
-          remainingProject={
-            otherPiecesRemaining === null ? null : otherPiecesRemaining + tally.remainingSteps
-          }
-          done={tally.done}
+          remainingPiece={remainingLater}
+          remainingProject={otherPiecesRemaining === null ? null : otherPiecesRemaining + remainingLater}
+          done={doneLater}
         />
       </div>
-      <nav aria-label="Tally" className="flex gap-2 px-3 pt-2 pb-[max(0.75rem,env(safe-area-inset-bottom))]">
-        <ToolButton
-          tone="strong"
-          onClick={() => {
-            undo();
-            backToZone();
-          }}
-          disabled={!tally.canUndo}
-          icon={<Undo2 aria-hidden className="h-6 w-6" />}
-        >
-          Undo
-        </ToolButton>
-        {settings.mode === 'round' ? (
-          <ToolButton
-            onClick={() => {
-              feedback(tally.step());
-              backToZone();
-            }}
-            disabled={tally.finished && !unread}
-            icon={<Plus aria-hidden className="h-6 w-6" />}
-          >
-            One stitch
-          </ToolButton>
-        ) : (
-          <ToolButton
-            onClick={() => {
-              roundDone();
-              backToZone();
-            }}
-            disabled={tally.finished && !unread}
-            icon={<CheckCheck aria-hidden className="h-6 w-6" />}
-          >
-            Round done
-          </ToolButton>
-        )}
-        <ToolButton onClick={() => setSheet('mark')} icon={<MapPinPlus aria-hidden className="h-6 w-6" />}>
-          Mark here
-        </ToolButton>
-        <ToolButton onClick={() => setSheet('jump')} icon={<ListOrdered aria-hidden className="h-6 w-6" />}>
-          Jump
-        </ToolButton>
-      </nav>
+      <TallyTools
+        mode={settings.mode}
+        canUndo={tally.canUndo}
+        countingDone={tally.finished && !unread}
+        onUndo={onUndo}
+        onOther={onOther}
+        openSheet={setSheet}
+      />
 
       {sheet === 'jump' ? (
         <JumpSheet
