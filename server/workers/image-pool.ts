@@ -11,6 +11,11 @@ import type { ImageJob, ImageResult } from './image.js';
 // thread always wins a core when it wakes up. Measured with tests/bench/photos.ts (three 12 MP photos at
 // once, machine shared with other work): 1 thread peaked at 644–699 MB with /api/health p99 32–58 ms;
 // 2 threads peaked at 1043 MB with p99 105–132 ms and finished no sooner.
+// Tried again on a quiet machine (DEVELOPERS.md, "Speed"): two threads 4.3 / 5.1 / 7.3 s for the three photos
+// and ~1050 MB; two threads taking turns at the decode (a shared lock) still ~1010 MB, because each thread's
+// malloc arena keeps its own decode's high-water mark; two threads as a decode → encode line 3.7–4.2 / 5.9–6.5 /
+// 7.5–8.2 s and ~800 MB, against one thread's 3.1–3.5 / 5.9–6.5 / 8.5–9.4 s and ~650 MB: too little for the
+// memory. What sets the pace is Jimp's JPEG decoder (jpeg-js, ~1.5 s and ~0.4 GB for 12 MP).
 export const IMAGE_THREADS = 1;
 /** Jobs waiting or running before new uploads are refused with 503; at least one full batch of 8 fits. */
 export const MAX_PENDING_JOBS = 16;
@@ -70,7 +75,8 @@ export class ImagePool {
   /**
    * Runs one job per input, all or none: the whole batch is admitted only if it fits in the queue,
    * so a request never ends up with half of its photos waiting. Results come back in input order;
-   * each entry is the job's result or the Error it failed with.
+   * each entry is the job's result or the Error it failed with. A job's bytes are handed over: the caller
+   * must not read them afterwards.
    */
   async runBatch(jobs: ImageJob[]): Promise<Array<ImageResult | Error>> {
     if (this.pending + jobs.length > this.maxPending) throw this.busy();
@@ -78,7 +84,10 @@ export class ImagePool {
     return Promise.all(
       jobs.map(async (job) => {
         try {
-          return await this.pool.run(job, { signal: AbortSignal.timeout(JOB_TIMEOUT_MS) });
+          return await this.pool.run(job, {
+            signal: AbortSignal.timeout(JOB_TIMEOUT_MS),
+            ...(ownsItsBuffer(job.bytes) ? { transferList: [job.bytes.buffer as ArrayBuffer] } : {}),
+          });
         } catch (err) {
           return err instanceof Error ? err : new Error(String(err));
         } finally {
@@ -91,6 +100,19 @@ export class ImagePool {
   close() {
     return this.pool.close();
   }
+}
+
+/**
+ * Whether a photo's bytes fill an ArrayBuffer of their own, so they can move to the worker rather than be copied
+ * (copying a 4 MB photo holds the request thread ~10 ms). multer gives every upload such a buffer; small Buffers
+ * are slices of Node's shared pool, which must never be moved, and are copied.
+ */
+function ownsItsBuffer(bytes: Uint8Array) {
+  return (
+    bytes.buffer instanceof ArrayBuffer &&
+    bytes.byteOffset === 0 &&
+    bytes.byteLength === bytes.buffer.byteLength
+  );
 }
 
 let shared: ImagePool | null = null;

@@ -44,3 +44,19 @@ describe('the photo worker pool', () => {
     expect(good).not.toBeInstanceOf(Error);
   });
 });
+
+describe('handing photos to the worker', () => {
+  it('moves bytes that have their own buffer (no copy on the request thread) and copies a slice of a shared one', async () => {
+    const own = await job(64, 48);
+    const shared = Buffer.concat([Buffer.alloc(16), await makeJpeg({ width: 64, height: 48 })]);
+    const slice = { ...(await job(64, 48)), bytes: new Uint8Array(shared.buffer, shared.byteOffset + 16, shared.byteLength - 16) };
+    const sliceLength = slice.bytes.byteLength;
+    const [a, b] = await pool.runBatch([own, slice]);
+    expect(a).not.toBeInstanceOf(Error);
+    expect(b).not.toBeInstanceOf(Error);
+    // A moved buffer is left empty behind; the shared one is untouched, and so is whatever else lives in it.
+    expect(own.bytes.byteLength).toBe(0);
+    expect(slice.bytes.byteLength).toBe(sliceLength);
+    expect(shared.byteLength).toBe(sliceLength + 16);
+  });
+});

@@ -72,3 +72,25 @@ export async function webpDeclaring(width: number, height: number, { flags = 0 }
   head.writeUInt32LE(body.length, 4);
   return Buffer.concat([head, body]);
 }
+
+/**
+ * A WebP carrying EXIF, as a phone or an editor writes it: the extended format, whose VP8X chunk sets the EXIF flag
+ * (0x08) and states the canvas, then the image chunk, then an "EXIF" chunk holding the raw TIFF structure (WebP
+ * container spec, "Extended File Format"; some writers add the JPEG-style "Exif\0\0" in front, `exifPrefix` does).
+ * `exif` is piexifjs's dump (which starts with that prefix).
+ */
+export async function makeWebpWithExif(exif: string, { width = 300, height = 200, exifPrefix = false } = {}) {
+  const simple = await makeWebp({ width, height });
+  const imageChunks = simple.subarray(12);
+  const vp8x = Buffer.alloc(10);
+  vp8x[0] = 0x08;
+  vp8x.writeUIntLE(width - 1, 4, 3);
+  vp8x.writeUIntLE(height - 1, 7, 3);
+  const dumped = Buffer.from(exif, 'binary');
+  const payload = exifPrefix ? dumped : dumped.subarray(6);
+  const body = Buffer.concat([Buffer.from('WEBP', 'ascii'), riffChunk('VP8X', vp8x), imageChunks, riffChunk('EXIF', payload)]);
+  const head = Buffer.alloc(8);
+  head.write('RIFF', 0, 'ascii');
+  head.writeUInt32LE(body.length, 4);
+  return Buffer.concat([head, body]);
+}
