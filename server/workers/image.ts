@@ -79,8 +79,8 @@ export default async function processImage(job: ImageJob): Promise<ImageResult> 
   const source = Buffer.from(job.bytes.buffer, job.bytes.byteOffset, job.bytes.byteLength);
   // The EXIF orientation (JPEG and WebP) is read here and applied after the resize, on 2 MP instead of 12: Jimp
   // would turn the full-size bitmap (~0.5 s of a core for a portrait phone photo), and it reads no WebP EXIF at
-  // all. The tag in this thread's own copy of the bytes (cloned into it) is set to 1, so Jimp leaves the pixels as
-  // stored.
+  // all. The tag in this thread's own copy of the bytes (moved or cloned into it) is set to 1, so Jimp leaves the
+  // pixels as stored.
   const orientation = exifOrientation(source, { neutralize: true });
   let image = await Jimp.read(source);
   const { width, height } = image.bitmap;
