@@ -252,7 +252,7 @@ function applyOne(st: Statements, tap: PendingTap): { progress: ProgressOut; app
   return { progress: { ...after, done, version, updatedAt }, applied: true };
 }
 
-// Group commit (D10 in DEVELOPERS.md). With synchronous = FULL every COMMIT waits for an fsync, and
+// Group commit (D11 in DEVELOPERS.md). With synchronous = FULL every COMMIT waits for an fsync, and
 // better-sqlite3 waits for it on the event loop, so under load the fsync, not the counting, sets the pace. Taps
 // that arrive while one is being written are therefore queued and written together: one BEGIN IMMEDIATE … COMMIT
 // (one fsync) for all of them, each tap inside its own savepoint so a refused tap (409/422/404) is rolled back

@@ -7,7 +7,7 @@ import { HttpError } from '../../../server/lib/http-error.js';
 import { checkPiece } from '../../../src/engine/index.js';
 
 // Taps that reach the service in the same turn of the event loop are written in one transaction (group commit,
-// D10). Calling the service without awaiting in between puts them in one batch for certain; these tests check that
+// D11). Calling the service without awaiting in between puts them in one batch for certain; these tests check that
 // a batch keeps each tap's own outcome: a refused tap is rolled back alone, the others count once and in order.
 
 let t: TestContext;
