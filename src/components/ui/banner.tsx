@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { AlertTriangle, Info, CheckCircle2, ShieldAlert } from 'lucide-react';
 import { cn } from '@/utils/cn';
+import { ApiError } from '@/lib/api-client';
 
 type Tone = 'info' | 'success' | 'warning' | 'caution';
 
@@ -26,5 +27,17 @@ export function Banner({ tone = 'info', title, children, action, className }: { 
       </div>
       {action}
     </div>
+  );
+}
+
+/** A form's "Not saved" strip: the server's sentence, and how many fields it named when there were several. */
+export function NotSavedBanner({ error }: { error: Error | null }) {
+  if (!error) return null;
+  const fields = error instanceof ApiError ? error.issues.length : 0;
+  return (
+    <Banner tone="warning" title="Not saved">
+      {error.message}
+      {fields > 1 ? ` (${fields} fields)` : ''}
+    </Banner>
   );
 }

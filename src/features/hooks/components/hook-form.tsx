@@ -1,9 +1,8 @@
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Banner } from '@/components/ui/banner';
+import { NotSavedBanner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
-import { ApiError } from '@/lib/api-client';
 import { formatHook, usHookSize } from '@/reference/hooks';
 import { HookInputSchema, HookMaterialSchema, hookMaterialLabels, type HookRollInput } from '@/schemas/hooks';
 import type { RollHook } from '@/types/hooks';
@@ -48,16 +47,10 @@ export function HookForm({
   });
   const { errors } = form.formState;
   const mm = useWatch({ control: form.control, name: 'mm' });
-  const issues = error instanceof ApiError ? error.issues : [];
 
   return (
     <form onSubmit={form.handleSubmit(onSave)} noValidate className="flex flex-col gap-4">
-      {error ? (
-        <Banner tone="warning" title="Not saved">
-          {error.message}
-          {issues.length > 1 ? ` (${issues.length} fields)` : ''}
-        </Banner>
-      ) : null}
+      <NotSavedBanner error={error ?? null} />
       <div className="grid grid-cols-[3fr_2fr] gap-3">
         <TextField label="Size (mm)" inputMode="decimal" placeholder="3.5" autoFocus={!hook} hint={<SizeHint mm={mm} />} error={errors.mm?.message} {...form.register('mm', { setValueAs: num })} />
         <TextField label="How many" inputMode="numeric" error={errors.quantity?.message} {...form.register('quantity', { setValueAs: num })} />

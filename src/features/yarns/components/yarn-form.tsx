@@ -1,9 +1,8 @@
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Banner } from '@/components/ui/banner';
+import { NotSavedBanner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
-import { ApiError } from '@/lib/api-client';
 import { categoryForPly, yarnWeightLabel } from '@/reference/yarn-weights';
 import { ShelfYarnInputSchema, type ShelfYarnInput } from '@/schemas/yarn';
 import type { ShelfYarn } from '@/types/api';
@@ -44,16 +43,10 @@ export function YarnForm({
   const { errors } = form.formState;
   const [ply, weight, meters, yards] = useWatch({ control: form.control, name: ['ply', 'weight', 'metersPerSkein', 'yardsPerSkein'] });
   const plyCategory = ply ? categoryForPly(ply) : undefined;
-  const issues = error instanceof ApiError ? error.issues : [];
 
   return (
     <form onSubmit={form.handleSubmit(onSave)} noValidate className="flex flex-col gap-4">
-      {error ? (
-        <Banner tone="warning" title="Not saved">
-          {error.message}
-          {issues.length > 1 ? ` (${issues.length} fields)` : ''}
-        </Banner>
-      ) : null}
+      <NotSavedBanner error={error ?? null} />
       <TextField label="Name" placeholder="Plum cotton" error={errors.name?.message} {...form.register('name')} />
       <div className="grid grid-cols-2 gap-3">
         <TextField label="Colour" error={errors.colour?.message} {...form.register('colour', { setValueAs: text })} />
