@@ -1,5 +1,6 @@
 import { Link, useSearchParams } from 'react-router-dom';
-import { BookOpen, ChevronRight, Gift, Library, Plus, Ruler, ShieldAlert } from 'lucide-react';
+import { BookOpen, ChevronRight, Gift, Library, Plus, Ruler, ShieldAlert, type LucideIcon } from 'lucide-react';
+import type { ReactNode } from 'react';
 import { ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { EmptyState, Loading, PageHeader } from '@/components/ui/page';
@@ -79,28 +80,29 @@ export default function ProjectsRoute() {
           Start one from a pattern, or from scratch.
         </EmptyState>
       )}
-      <Link
-        to={paths.yarnShelf}
-        className="mt-8 flex min-h-tap items-center gap-3 rounded-soft bg-wool/60 px-4 py-3 font-semibold hover:bg-wool dark:bg-white/5 dark:hover:bg-white/10"
-      >
-        <Library aria-hidden className="h-5 w-5 text-moss dark:text-[#9cc3a8]" />
-        <span className="flex-1">
-          Yarn shelf
-          <span className="block text-sm font-normal text-ink/70 dark:text-oat/70">Your yarns and how much is left</span>
-        </span>
-        <ChevronRight aria-hidden className="h-5 w-5" />
-      </Link>
-      <Link
-        to={paths.hookRoll}
-        className="mt-3 flex min-h-tap items-center gap-3 rounded-soft bg-wool/60 px-4 py-3 font-semibold hover:bg-wool dark:bg-white/5 dark:hover:bg-white/10"
-      >
-        <Ruler aria-hidden className="h-5 w-5 text-moss dark:text-[#9cc3a8]" />
-        <span className="flex-1">
-          Hook roll
-          <span className="block text-sm font-normal text-ink/70 dark:text-oat/70">Your hooks, smallest first</span>
-        </span>
-        <ChevronRight aria-hidden className="h-5 w-5" />
-      </Link>
+      <ShelfLink to={paths.yarnShelf} icon={Library} title="Yarn shelf" className="mt-8">
+        Your yarns and how much is left
+      </ShelfLink>
+      <ShelfLink to={paths.hookRoll} icon={Ruler} title="Hook roll" className="mt-3">
+        Your hooks, smallest first
+      </ShelfLink>
     </>
+  );
+}
+
+/** A way from the project list to one of the maker's own supplies (the yarn shelf, the hook roll). */
+function ShelfLink({ to, icon: Icon, title, className, children }: { to: string; icon: LucideIcon; title: string; className: string; children: ReactNode }) {
+  return (
+    <Link
+      to={to}
+      className={`${className} flex min-h-tap items-center gap-3 rounded-soft bg-wool/60 px-4 py-3 font-semibold hover:bg-wool dark:bg-white/5 dark:hover:bg-white/10`}
+    >
+      <Icon aria-hidden className="h-5 w-5 text-moss dark:text-[#9cc3a8]" />
+      <span className="flex-1">
+        {title}
+        <span className="block text-sm font-normal text-ink/70 dark:text-oat/70">{children}</span>
+      </span>
+      <ChevronRight aria-hidden className="h-5 w-5" />
+    </Link>
   );
 }
